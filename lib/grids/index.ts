@@ -1,0 +1,12 @@
+export { readNetcdfGrid, netcdfFormat } from './read-netcdf-grid.js';
+export { readCsvGrid } from './read-csv-grid.js';
+export { cfGrid } from './cf-grid.js';
+export { decodeCfTime } from './cf-time.js';
+export { unpackingOf, unpackValue, DEFAULT_FILL } from './cf-packing.js';
+export { axisRole } from './cf-axes.js';
+export { defaultToCanonical, DEFAULT_DENSITY } from './default-to-canonical.js';
+export { CANONICAL_GRID_UNITS } from './options.js';
+export type { GridReadOptions, ToCanonical, UnitFactor, PressureToDepth } from './options.js';
+export type { NetcdfDataset, DatasetVariable, AttributeValue, NumericArray, NetcdfType } from './dataset.js';
+export type { Unpacking } from './cf-packing.js';
+export type { AxisRole } from './cf-axes.js';
