@@ -1,0 +1,66 @@
+#!/usr/bin/env node
+// The basinquota command line: the only shell around the pure core.
+import { parseArgs } from 'node:util';
+import { join } from 'node:path';
+import { buildProject } from './build-project.js';
+import { checkProject } from './check-project.js';
+import { initProject } from './init-project.js';
+import * as msg from './messages.js';
+import { PACKAGE_ROOT } from './package-info.js';
+
+const log = (line: string): void => {
+  process.stderr.write(`${line}\n`);
+};
+
+/** Run one command line; resolves to the exit code. */
+export async function main(argv: string[]): Promise<number> {
+  const [command, ...rest] = argv;
+  if (!command || command === '--help' || command === '-h' || command === 'help') {
+    process.stdout.write(msg.usage());
+    return command ? 0 : 2;
+  }
+  let parsed;
+  try {
+    parsed = parseArgs({ args: rest, allowPositionals: true, options: { out: { type: 'string' }, config: { type: 'string' }, help: { type: 'boolean', short: 'h' } } });
+  } catch (error) {
+    log(error instanceof Error ? error.message : String(error));
+    return 2;
+  }
+  const { values, positionals } = parsed;
+  if (values.help) {
+    process.stdout.write(msg.commandHelp[command] ?? msg.usage());
+    return 0;
+  }
+  switch (command) {
+    case 'init':
+      if (positionals.length !== 1) {
+        process.stderr.write(msg.commandHelp.init);
+        return 2;
+      }
+      return initProject(positionals[0], log);
+    case 'check':
+      return checkProject(positionals[0] ?? '.', values.config, log);
+    case 'build':
+      return (await buildProject({ dir: positionals[0] ?? '.', config: values.config, out: values.out, log })).code;
+    case 'demo': {
+      const demo = join(PACKAGE_ROOT, 'data', 'demo');
+      return (await buildProject({ dir: demo, out: values.out ?? join(PACKAGE_ROOT, '_site-demo'), log })).code;
+    }
+    default:
+      log(msg.unknownCommand(command));
+      return 2;
+  }
+}
+
+const isEntry = process.argv[1] && /main\.(ts|js)$/.test(process.argv[1]);
+if (isEntry) {
+  main(process.argv.slice(2)).then(
+    (code) => {
+      process.exitCode = code;
+    },
+    (error: unknown) => {
+      log(`internal error: ${error instanceof Error ? error.message : String(error)}`);
+      process.exitCode = 3;
+    },
+  );
+}

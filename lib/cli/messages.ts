@@ -1,0 +1,50 @@
+// User-facing messages of the command line.
+
+/** Top-level usage. */
+export const usage = (): string => `basinquota — synthesis reports of ocean nutrient and phytoplankton metal-quota data
+
+Usage:
+  basinquota init DIR            write a new synthesis project with an example config
+  basinquota check [DIR]         validate the config and every input; exit 1 on any error
+  basinquota build [DIR] [--out DIR] [--config FILE]
+                                 run the pipeline and write the report site
+  basinquota --help | COMMAND --help
+
+Exit codes: 0 success, 1 invalid config or input (messages as file:line:col), 2 wrong usage, 3 internal or disk error.
+`;
+
+/** Help per command. */
+export const commandHelp: Record<string, string> = {
+  init: `basinquota init DIR
+  Write a new synthesis project into DIR (which must be empty or absent): a commented basinquota.yaml
+  and small example sample and cell files. Exit 0 on success, 2 if DIR is not empty.
+`,
+  check: `basinquota check [DIR] [--config FILE]
+  Validate DIR/basinquota.yaml (or FILE) and read every input through the pipeline without writing anything.
+  Every problem is printed as file:line:col message. Exit 1 on any error, 0 otherwise.
+`,
+  build: `basinquota build [DIR] [--out DIR] [--config FILE]
+  Run the pipeline on the project in DIR (default .) and write the report site to --out (default DIR/_site).
+  The site is written to a temporary folder and swapped in only when the build succeeds.
+  Progress per stage goes to stderr. Exit 1 on invalid input, 3 on a disk error.
+`,
+};
+
+/** Unknown command. */
+export const unknownCommand = (name: string): string => `unknown command "${name}"; run basinquota --help`;
+
+/** init into a folder that has files. */
+export const initNotEmpty = (dir: string): string => `${dir} is not empty; choose a new or empty folder`;
+
+/** A config path that resolves (through a symlink) outside the project. */
+export const symlinkLeaves = (path: string): string => `path "${path}" resolves outside the project folder (through a symbolic link)`;
+
+/** An input file that does not exist. */
+export const fileMissing = (path: string): string => `input file "${path}" does not exist`;
+
+/** An output folder that cannot be written. */
+export const cannotWrite = (dir: string, reason: string): string => `cannot write the site to ${dir}: ${reason}`;
+
+/** Summary after check. */
+export const checkSummary = (errors: number, warnings: number): string =>
+  errors === 0 ? `check passed${warnings ? ` with ${warnings} warning${warnings === 1 ? '' : 's'}` : ''}` : `check failed: ${errors} error${errors === 1 ? '' : 's'}${warnings ? `, ${warnings} warning${warnings === 1 ? '' : 's'}` : ''}`;

@@ -1,0 +1,86 @@
+// The load stage over every configured table file: decode, parse, concatenate, count.
+import * as aq from 'arquero';
+import type { Config } from '../config/index.js';
+import type { Ledger } from '../ledger/index.js';
+import { decodeUtf8, readTable, type TableName } from '../load/index.js';
+import type { InputBytes, Problem } from '../types.js';
+
+/** Rows read from one input file (the ledger invariant is checked per file). */
+export interface FileCount {
+  /** Logical table. */
+  table: TableName;
+  /** File path as in the config. */
+  file: string;
+  /** Data records read. */
+  rowsRead: number;
+}
+
+/** Loaded tables: one Arquero table per file, in config order. */
+export interface LoadedTables {
+  /** Per samples file, its table. */
+  samples: aq.ColumnTable[];
+  /** Per cells file, its table. */
+  cells: aq.ColumnTable[];
+  /** Rows read per file. */
+  counts: FileCount[];
+  /** File-level problems. */
+  problems: Problem[];
+}
+
+/** Read every samples and cells file named in the config. */
+export function loadTables(config: Config, files: Map<string, InputBytes>, ledger: Ledger): LoadedTables {
+  const out: LoadedTables = { samples: [], cells: [], counts: [], problems: [] };
+  const entries: [TableName, Config['inputs']['samples'] | Config['inputs']['cells']][] = [
+    ['samples', config.inputs.samples],
+    ['cells', config.inputs.cells],
+  ];
+  for (const [table, list] of entries) {
+    for (const entry of list) {
+      const bytes = files.get(entry.path);
+      if (!bytes) throw new Error(`internal: file ${entry.path} was not read`);
+      const decoded = decodeUtf8(bytes);
+      if ('severity' in decoded) {
+        out.problems.push(decoded);
+        continue;
+      }
+      const result = readTable(decoded, { table, columns: entry.columns, delimiter: entry.delimiter, cruise: entry.cruise }, ledger);
+      out.problems.push(...result.problems);
+      out.counts.push({ table, file: entry.path, rowsRead: result.rowsRead });
+      out[table].push(result.table);
+    }
+  }
+  return out;
+}
+
+/** Concatenate per-file tables (columns missing in some files become missing values). */
+export function concatTables(tables: aq.ColumnTable[]): aq.ColumnTable {
+  const nonEmpty = tables.filter((t) => t.numCols() > 0);
+  if (nonEmpty.length === 0) return aq.table({});
+  const names = [...new Set(nonEmpty.flatMap((t) => t.columnNames()))];
+  const columns: Record<string, unknown[]> = {};
+  for (const name of names) {
+    const out: unknown[] = [];
+    for (const t of nonEmpty) {
+      const n = t.numRows();
+      if (t.columnNames().includes(name)) {
+        const values = t.array(name) as ArrayLike<unknown>;
+        for (let i = 0; i < n; i++) out.push(values[i]);
+      } else {
+        const fill = isNumericName(name, nonEmpty) ? NaN : null;
+        for (let i = 0; i < n; i++) out.push(fill);
+      }
+    }
+    columns[name] = out;
+  }
+  return aq.table(columns);
+}
+
+function isNumericName(name: string, tables: aq.ColumnTable[]): boolean {
+  for (const t of tables) {
+    if (t.columnNames().includes(name) && t.numRows() > 0) {
+      const v = t.get(name, 0);
+      return typeof v === 'number';
+    }
+  }
+  return false;
+}

@@ -1,0 +1,12 @@
+import type { Config } from '../config/index.js';
+import type { InputBytes } from '../types.js';
+
+/** Everything a build reads, already in memory: the validated config and the bytes of every input file by config path. */
+export interface ProjectInputs {
+  /** Config file name relative to the project (messages). */
+  configFile: string;
+  /** Validated config. */
+  config: Config;
+  /** File bytes keyed by the path as written in the config. */
+  files: Map<string, InputBytes>;
+}

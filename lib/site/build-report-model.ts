@@ -1,0 +1,60 @@
+// Assemble the page model from a pipeline result and the build's metadata.
+import type { Config } from '../config/index.js';
+import type { PipelineResult } from '../pipeline/index.js';
+import { countBy, groupLedger, inventoryByCruise } from './inventory.js';
+import type { FileAccount, ReportModel } from './report-model.js';
+
+/** Facts of the build that come from the shell: version number, date, tool version. */
+export interface BuildFacts {
+  /** Report version number. */
+  version: number;
+  /** ISO 8601 build date. */
+  date: string;
+  /** basinquota package version. */
+  toolVersion: string;
+}
+
+/** Pages every build has. */
+const BASE_PAGES = ['index.html', 'inventory.html'];
+
+/** Build the ReportModel the templates read. */
+export function buildReportModel(config: Config, result: PipelineResult, facts: BuildFacts): ReportModel {
+  const { samples, cells, ledger } = result;
+  const inventory = inventoryByCruise(samples, cells);
+  const stations = new Set<string>();
+  for (const table of [samples, cells]) {
+    if (table.numRows() === 0) continue;
+    const cruise = table.array('cruise') as ArrayLike<string>;
+    const station = table.array('station') as ArrayLike<string>;
+    for (let i = 0; i < table.numRows(); i++) stations.add(`${cruise[i]}\u0000${station[i]}`);
+  }
+  const classColumn = cells.columnNames().includes('class') ? 'class' : 'phyto_class';
+  const files: FileAccount[] = result.counts.map((c) => {
+    const excluded = ledger.excluded(c.table, c.file).length;
+    return { table: c.table, file: c.file, rowsRead: c.rowsRead, rowsUsed: c.rowsRead - excluded, rowsExcluded: excluded };
+  });
+  return {
+    meta: {
+      title: config.report.title,
+      authors: config.report.authors,
+      programme: config.report.programme ?? null,
+      licence: config.report.licence,
+      contact: config.report.contact ?? null,
+      version: facts.version,
+      date: facts.date,
+      toolVersion: facts.toolVersion,
+    },
+    counts: {
+      cruises: inventory.length,
+      stations: stations.size,
+      samples: samples.numRows(),
+      cells: cells.numRows(),
+      cellsByClass: countBy(cells, classColumn),
+    },
+    inventory,
+    files,
+    ledger: groupLedger(ledger.entries),
+    pages: [...BASE_PAGES],
+    sections: {},
+  };
+}

@@ -1,0 +1,4 @@
+export { buildReportModel, type BuildFacts } from './build-report-model.js';
+export type { ReportModel, ReportMeta, ReportCounts, FileAccount } from './report-model.js';
+export { inventoryByCruise, groupLedger, countBy, type CruiseInventory, type LedgerGroup } from './inventory.js';
+export { toCsv, csvField, neutraliseCell } from './csv.js';

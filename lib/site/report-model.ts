@@ -1,0 +1,68 @@
+// The plain-data model every page template reads; built from pipeline results, never from disk.
+import type { CruiseInventory, LedgerGroup } from './inventory.js';
+
+/** Report metadata shown on every page. */
+export interface ReportMeta {
+  /** Report title. */
+  title: string;
+  /** Authors in citation order. */
+  authors: string[];
+  /** Programme or working group, if any. */
+  programme: string | null;
+  /** Licence of the report. */
+  licence: string;
+  /** Contact, if any. */
+  contact: string | null;
+  /** Report version number (1, 2, …). */
+  version: number;
+  /** Build date, ISO 8601 (from SOURCE_DATE_EPOCH or the newest input). */
+  date: string;
+  /** basinquota package version. */
+  toolVersion: string;
+}
+
+/** Headline counts on the Overview page. */
+export interface ReportCounts {
+  /** Distinct cruises. */
+  cruises: number;
+  /** Distinct cruise/station pairs. */
+  stations: number;
+  /** Bottle rows used. */
+  samples: number;
+  /** Cell rows used. */
+  cells: number;
+  /** Cells per phytoplankton class. */
+  cellsByClass: { value: string; count: number }[];
+}
+
+/** Rows read per input file and how many the ledger excluded. */
+export interface FileAccount {
+  /** Logical table. */
+  table: string;
+  /** File path in the project. */
+  file: string;
+  /** Data rows read. */
+  rowsRead: number;
+  /** Rows used downstream. */
+  rowsUsed: number;
+  /** Rows excluded in the ledger. */
+  rowsExcluded: number;
+}
+
+/** Everything the page templates need. Sections that a stage did not produce are absent. */
+export interface ReportModel {
+  /** Metadata. */
+  meta: ReportMeta;
+  /** Headline counts. */
+  counts: ReportCounts;
+  /** Per-cruise holdings. */
+  inventory: CruiseInventory[];
+  /** Per-file accounting (rows read = used + excluded). */
+  files: FileAccount[];
+  /** Ledger grouped by reason. */
+  ledger: LedgerGroup[];
+  /** Pages this build has (hrefs), for the navigation. */
+  pages: string[];
+  /** Further sections added by later stages, keyed by page. */
+  sections: Record<string, unknown>;
+}
