@@ -142,3 +142,13 @@ export function csvMissingNode(file: string, node: string, present: number, latt
 export function csvParse(file: string, line: number, detail: string): string {
   return `${file}:${line}: ${detail}`;
 }
+
+/** sampleGrid: a climatology needs the month of the sample. */
+export function sampleNeedsMonth(source: string, variable: string): string {
+  return `${source}: grid ${variable} is a monthly climatology; the sample point needs month (1..12) or timeMs`;
+}
+
+/** sampleGrid: a time-series grid needs the time of the sample. */
+export function sampleNeedsTime(source: string, variable: string): string {
+  return `${source}: grid ${variable} has a time axis; the sample point needs timeMs`;
+}
