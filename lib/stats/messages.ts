@@ -49,3 +49,8 @@ export function ancovaGroups(groups: number): string {
 export function badGroupIndex(row: number, value: number): string {
   return `group index of row ${row} is ${value}; group indices must be integers from 0`;
 }
+
+/** A fitted parameter stopped at its lower bound, so the optimum lies outside the allowed range. */
+export function atBound(what: string, name: string, value: number): string {
+  return `${what} drove ${name} to its lower bound (${value}): the data show no saturation in range`;
+}
