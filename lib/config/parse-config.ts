@@ -28,7 +28,7 @@ export function parseConfig(file: string, text: string, hooks: SemanticHooks = {
     problems.push({ file, line, col, message, severity: 'error' });
   };
   for (const error of doc.errors) {
-    const pos = error.linePos?.[0] ?? { line: 0, col: 0 };
+    const pos = error.linePos?.[0] ?? lines.linePos(error.pos[0]);
     problem(pos.line, pos.col, msg.yamlSyntax(error.message.split('\n')[0]));
   }
   if (problems.length) return { problems };
