@@ -50,20 +50,22 @@ function coordinateOf(dataset: NetcdfDataset, dim: string): DatasetVariable | un
 /** Finds lon, lat, depth and time among the dimensions of `variable`; size-1 unknown dimensions are ignored. */
 export function findGridAxes(dataset: NetcdfDataset, variable: DatasetVariable): GridAxes {
   const axes: GridAxes['axes'] = {};
+  const unknown: string[] = [];
   variable.dims.forEach((dim, position) => {
     const coordinate = coordinateOf(dataset, dim);
     const role = coordinate ? axisRole(coordinate) : undefined;
     if (!coordinate || !role) {
-      if (variable.shape[position] === 1) return;
-      throw new Error(
-        unsupportedLayout(dataset.name, variable.name, `dimension ${dim} (length ${variable.shape[position]}) is not a longitude, latitude, vertical or time axis`),
-      );
+      if (variable.shape[position] !== 1) unknown.push(`${dim} (length ${variable.shape[position]})`);
+      return;
     }
     if (axes[role]) throw new Error(unsupportedLayout(dataset.name, variable.name, `dimensions ${axes[role].coordinate.name} and ${dim} are both ${role} axes`));
     axes[role] = { coordinate, position };
   });
   if (!axes.lat) throw new Error(noAxis(dataset.name, variable.name, variable.dims, 'latitude'));
   if (!axes.lon) throw new Error(noAxis(dataset.name, variable.name, variable.dims, 'longitude'));
+  if (unknown.length > 0) {
+    throw new Error(unsupportedLayout(dataset.name, variable.name, `dimension ${unknown.join(', ')} is not a longitude, latitude, vertical or time axis`));
+  }
   let scalarDepth: DatasetVariable | undefined;
   if (!axes.depth) {
     const names = (textAttribute(variable.attributes, 'coordinates') ?? '').split(/\s+/);

@@ -37,7 +37,8 @@ function depthAxis(file: string, coordinate: DatasetVariable, midLat: number, op
     note(options, file, 'pressure-as-depth', msg.pressureAsDepth(coordinate.name, how));
   } else if (units in LENGTH_UNITS) {
     const sign = positive === 'up' ? -1 : 1;
-    depth = raw.map((z) => sign * z * LENGTH_UNITS[units]);
+    // + 0 turns the -0 of a negated surface level into 0.
+    depth = raw.map((z) => sign * z * LENGTH_UNITS[units] + 0);
   } else {
     throw new Error(msg.unsupportedLayout(file, coordinate.name, `vertical axis units "${units}"; expected m or dbar`));
   }

@@ -1,7 +1,7 @@
 import * as h5wasm from 'h5wasm/node';
 import type { InputBytes } from '../types.js';
 import type { AttributeValue, DatasetVariable, NetcdfDataset, NetcdfType, NumericArray } from './dataset.js';
-import { notNetcdf } from './messages.js';
+import { notNetcdf, truncatedHdf5 } from './messages.js';
 
 // The wasm module loads once per process, when this module is first imported (about 0.2 s).
 await h5wasm.ready;
@@ -24,6 +24,24 @@ const INTERNAL_ATTRIBUTES = new Set([
 const DIMENSION_ONLY = 'This is a netCDF dimension but not a netCDF variable';
 
 let openCount = 0;
+
+/**
+ * End-of-file address stored in the HDF5 superblock (HDF5 File Format Specification, "Superblock",
+ * versions 0–3), read before opening so a truncated file gets a clear message instead of the
+ * library's diagnostics on stderr.
+ */
+export function hdf5StoredEof(bytes: Uint8Array): number | undefined {
+  if (bytes.length < 16) return undefined;
+  const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  const version = bytes[8];
+  const sizeOfOffsets = version >= 2 ? bytes[9] : bytes[13];
+  const base = version >= 2 ? 12 : version === 1 ? 28 : 24;
+  const at = base + 2 * sizeOfOffsets;
+  if (version > 3 || at + sizeOfOffsets > bytes.length) return undefined;
+  if (sizeOfOffsets === 8) return Number(view.getBigUint64(at, true));
+  if (sizeOfOffsets === 4) return view.getUint32(at, true);
+  return undefined;
+}
 
 interface Hdf5Metadata {
   type: number;
@@ -99,13 +117,17 @@ export interface OpenHdf5Dataset {
 export function hdf5Dataset(input: InputBytes): OpenHdf5Dataset {
   const FS = h5wasm.FS;
   if (FS === null) throw new Error(notNetcdf(input.name, 'the HDF5 library did not load'));
+  const storedEof = hdf5StoredEof(input.bytes);
+  if (storedEof === undefined || storedEof > input.bytes.length) {
+    throw new Error(truncatedHdf5(input.name, storedEof, input.bytes.length));
+  }
   // MEMFS path inside the wasm module, never the real disk.
   const path = `/basinquota-grid-${++openCount}.nc`;
   FS.writeFile(path, input.bytes);
   let file: InstanceType<typeof h5wasm.File>;
   try {
     file = new h5wasm.File(path, 'r');
-    file.keys();
+    if (file.file_id < 0n) throw new Error('HDF5 could not open the file');
   } catch (error) {
     FS.unlink(path);
     throw new Error(notNetcdf(input.name, error instanceof Error ? error.message : String(error)), { cause: error });

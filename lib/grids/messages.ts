@@ -21,6 +21,13 @@ export function truncatedVariable(file: string, variable: string, needed: number
   return `${file}: file is truncated: variable ${variable} needs ${needed} bytes but the file has ${length}`;
 }
 
+/** A netCDF-4 file shorter than its superblock says, or with an unreadable superblock. */
+export function truncatedHdf5(file: string, storedEof: number | undefined, length: number): string {
+  return storedEof === undefined
+    ? `${file}: not a readable netCDF-4 file: the HDF5 superblock cannot be read (${length} bytes)`
+    : `${file}: file is truncated: the HDF5 superblock says ${storedEof} bytes but the file has ${length}`;
+}
+
 /** No variable matches the requested name or standard_name. */
 export function variableNotFound(file: string, wanted: string, available: { name: string; standardName?: string }[]): string {
   const list = available.map((v) => (v.standardName ? `${v.name} (${v.standardName})` : v.name)).join(', ');
