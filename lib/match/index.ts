@@ -11,3 +11,7 @@ export {
 } from './match-options.js';
 export type { GridSampler, MatchOptions } from './match-options.js';
 export { meanLongitude } from './bottle-index.js';
+export { crossoverOffsets } from './crossover.js';
+export type { CrossoverOptions, CruiseOffset, StationPairDifference } from './crossover.js';
+export { applyOffsets } from './apply-offsets.js';
+export type { ApprovedOffset } from './apply-offsets.js';
