@@ -50,19 +50,22 @@ interface SampleFault {
   action: FaultRecord['expected_action'];
 }
 
-/** Bottle faults; all at depths where no cells are taken except the censored dFe, whose depths the cells avoid. */
+/**
+ * Bottle faults; all at depths where no cells are taken except the censored dFe, whose depths the cells avoid.
+ * A bad or unknown flag drops the one value (the row stays), so those are 'flagged', not 'excluded'.
+ */
 export const SAMPLE_FAULTS: readonly SampleFault[] = [
   { cruise: 'SG2104', station: 6, depth: 500, kind: 'duplicate-bottle', reason: 'duplicate-bottle', action: 'excluded' },
-  { cruise: 'SG2104', station: 8, depth: 1500, kind: 'bad-flag', column: 'dissolved_fe_flag', value: '4', reason: 'bad-flag', action: 'excluded' },
-  { cruise: 'TH2110', station: 2, depth: 2500, kind: 'unknown-flag', column: 'nitrate_flag', value: 'X', reason: 'unknown-flag', action: 'excluded' },
+  { cruise: 'SG2104', station: 8, depth: 1500, kind: 'bad-flag', column: 'dissolved_fe_flag', value: '4', reason: 'flag-not-accepted', action: 'flagged' },
+  { cruise: 'TH2110', station: 2, depth: 2500, kind: 'unknown-flag', column: 'nitrate_flag', value: 'X', reason: 'unknown-flag', action: 'flagged' },
   { cruise: 'TH2110', station: 5, depth: 500, kind: 'comma-decimal', column: 'nitrate', reason: 'not-a-number', action: 'excluded' },
-  { cruise: 'CR2206', station: 7, depth: 10, kind: 'below-detection', column: 'dissolved_fe', value: '<0.02', reason: 'below-detection', action: 'converted' },
-  { cruise: 'CR2206', station: 7, depth: 25, kind: 'below-detection', column: 'dissolved_fe', value: '<0.02', reason: 'below-detection', action: 'converted' },
+  { cruise: 'CR2206', station: 7, depth: 10, kind: 'below-detection', column: 'dissolved_fe', value: '<0.02', reason: 'below-detection-substituted', action: 'converted' },
+  { cruise: 'CR2206', station: 7, depth: 25, kind: 'below-detection', column: 'dissolved_fe', value: '<0.02', reason: 'below-detection-substituted', action: 'converted' },
   { cruise: 'SG2301', station: 3, depth: 1000, kind: 'ragged-row', reason: 'ragged-row', action: 'excluded' },
 ];
 
 /** The extra station written with latitude and longitude swapped, which puts it in southern Africa; it has no cells. */
-export const SWAPPED_STATION = { cruise: 'SG2104', intended: [26.0, -31.0] as const, reason: 'on-land' } as const;
+export const SWAPPED_STATION = { cruise: 'SG2104', intended: [26.0, -31.0] as const, reason: 'position-on-land' } as const;
 
 /** A planned fault on the n-th cell row (0-based) of a cruise's cell file. */
 interface CellFault {
