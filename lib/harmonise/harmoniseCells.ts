@@ -10,13 +10,17 @@ import { checkNegativeDepth, checkOnLand, checkPositionRange } from './positionC
 import { sortConversions, type ConversionCount, type HarmoniseResult } from './result.js';
 import { RowLedger } from './rowLedger.js';
 
-const NUMERIC = Object.entries(CELL_COLUMNS)
-  .filter(([, kind]) => kind === 'number')
-  .map(([name]) => name);
+// Per-cell detection limits `<el>_dl` come from the loader's censored-value parsing, in the content's unit.
+const NUMERIC = [
+  ...Object.entries(CELL_COLUMNS)
+    .filter(([, kind]) => kind === 'number')
+    .map(([name]) => name),
+  ...ELEMENTS.map((el) => `${el}_dl`),
+];
 
 const FOLLOWERS: Record<string, string> = {
   carbon_sigma: 'carbon',
-  ...Object.fromEntries(ELEMENTS.map((el) => [`${el}_sigma`, el])),
+  ...Object.fromEntries(ELEMENTS.flatMap((el) => [[`${el}_sigma`, el], [`${el}_dl`, el]])),
 };
 
 /** Throw when a cell id occurs twice in the file, naming both lines. */
@@ -35,7 +39,8 @@ function checkDuplicateIds(ids: (string | null)[] | null, rows: RowLedger): void
 /**
  * Harmonise one cell file: duplicate cell ids (an error), fill values, position range and longitude, negative depth,
  * units to canonical (contents and carbon to mol/cell, pg C via 12.011 g/mol, IUPAC; biovolume µm³; dimensions µm)
- * and positions on land. Non-positive contents are left to the quotas stage. Rows in = rows out + 'excluded' rows.
+ * and positions on land. Below-detection and non-positive contents are left as loaded (NaN with `<el>_below_dl`) for the
+ * quotas stage. Rows in = rows out + 'excluded' rows.
  */
 export function harmoniseCells(table: aq.ColumnTable, options: CellHarmoniseOptions, ledger: Ledger): HarmoniseResult {
   const file = options.file;

@@ -133,7 +133,7 @@ export function harmoniseSamples(table: aq.ColumnTable, options: SampleHarmonise
       { quantity: q, values, limits, flags: textColumn(table, `${q}_flag`), belowDl: booleanColumn(table, `${q}_below_dl`) },
       {
         scheme: options.flags ?? 'none',
-        accept: options.accept ?? ['good', 'questionable'],
+        accept: options.accept ?? ['good', 'questionable', 'below_detection'],
         policy: options.detectionLimitPolicy ?? 'half',
         defaultLimit: options.defaultDetectionLimits?.[q] ?? NaN,
       },

@@ -57,10 +57,10 @@ export function belowDetectionSubstituted(quantity: string, limit: number, value
 }
 
 /** Ledger detail: a below-detection value removed by policy, or because no limit is known. */
-export function belowDetectionExcluded(quantity: string, reason: 'policy' | 'no-limit'): string {
-  return reason === 'policy'
-    ? `${quantity} below detection limit: not used (policy exclude)`
-    : `${quantity} below detection limit but no limit is known (no ${quantity}_dl, no value, no default): not used`;
+export function belowDetectionExcluded(quantity: string, reason: 'policy' | 'not-accepted' | 'no-limit'): string {
+  if (reason === 'policy') return `${quantity} below detection limit: not used (policy exclude)`;
+  if (reason === 'not-accepted') return `${quantity} below detection limit: not used (below_detection is not an accepted quality)`;
+  return `${quantity} below detection limit but no limit is known (no ${quantity}_dl, no value, no default): not used`;
 }
 
 /** Error: the same cell id twice in one file. */

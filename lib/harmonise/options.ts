@@ -33,7 +33,7 @@ export interface CommonHarmoniseOptions {
 export interface SampleHarmoniseOptions extends CommonHarmoniseOptions {
   /** Flag scheme of the `<q>_flag` columns: 'ioc', 'woce', 'none' or a user map {raw: internal}; default 'none'. */
   flags?: FlagScheme;
-  /** Internal qualities whose values enter; default ['good', 'questionable'] (questionable stays marked in `<q>_quality`). */
+  /** Internal qualities whose values enter; default ['good', 'questionable', 'below_detection'] (questionable stays marked in `<q>_quality`; below-detection values enter as substituted by the policy). */
   accept?: readonly QualityFlag[];
   /** Below-detection policy: 'half' (DL/2, common practice), 'limit' (DL) or 'exclude'; default 'half'. */
   detectionLimitPolicy?: DetectionLimitPolicy;

@@ -66,7 +66,8 @@ function rowQuality(c: QuantityColumns, i: number, s: QualitySettings, rows: Row
 /**
  * Map one quantity's flags to the internal scale and apply the detection-limit policy, in place.
  * Below-detection values become DL/2 ('half', common practice) or DL ('limit'); the limit is the row's `<q>_dl`,
- * else the reported value (IOC flag 6 reports the limit as the value), else the default. Returns the quality column
+ * else the reported value (IOC flag 6 reports the limit as the value), else the default; they enter only when
+ * 'below_detection' is accepted. Returns the quality column
  * and the number of substitutions.
  */
 export function applyQuality(c: QuantityColumns, s: QualitySettings, rows: RowLedger, kept: number[]): { quality: (QualityFlag | null)[]; substituted: number } {
@@ -80,9 +81,9 @@ export function applyQuality(c: QuantityColumns, s: QualitySettings, rows: RowLe
       continue;
     }
     if (q === 'below_detection') {
-      if (s.policy === 'exclude') {
+      if (s.policy === 'exclude' || !s.accept.includes('below_detection')) {
         c.values[i] = NaN;
-        rows.add(i, 'flagged', 'below-detection-excluded', belowDetectionExcluded(c.quantity, 'policy'));
+        rows.add(i, 'flagged', 'below-detection-excluded', belowDetectionExcluded(c.quantity, s.policy === 'exclude' ? 'policy' : 'not-accepted'));
         continue;
       }
       const limit = Number.isFinite(c.limits[i]) ? c.limits[i] : Number.isFinite(c.values[i]) ? c.values[i] : s.defaultLimit;

@@ -90,6 +90,7 @@ for (const q of SAMPLE_QUANTITIES) {
 for (const el of ELEMENTS) {
   TABLE[el] = CONTENT;
   TABLE[`${el}_sigma`] = CONTENT;
+  TABLE[`${el}_dl`] = CONTENT;
 }
 
 /** Canonical unit of a canonical column name (dissolved_fe → nmol/kg, fe → mol/cell, depth → m); undefined for unitless columns. */

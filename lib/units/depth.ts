@@ -1,4 +1,4 @@
-// Saunders & Fofonoff (1976) formula as given in Fofonoff & Millard (1983), UNESCO Tech. Pap. Mar. Sci. 44, p. 28.
+// Saunders & Fofonoff (1976) formula as given in Fofonoff & Millard (1983), UNESCO Tech. Pap. Mar. Sci. 44.
 
 function gravity(p: number, lat: number): number {
   const x = Math.sin((lat * Math.PI) / 180) ** 2;

@@ -79,3 +79,13 @@ describe('harmoniseCells(table, options, ledger)', () => {
     expect(table.columnNames()).toEqual(t.columnNames());
   });
 });
+
+describe('harmoniseCells: detection limits of contents', () => {
+  it('converts <el>_dl with the content unit and leaves below-detection contents to the quotas stage', () => {
+    const t = cellTable([{ cell_id: 'a', fe: NaN, fe_dl: 30, fe_below_dl: true }]);
+    const { table } = run(t, { units: { fe: 'amol/cell' } });
+    expect(col(table, 'fe_dl')[0]).toBeCloseTo(30e-18, 30);
+    expect(col(table, 'fe')).toEqual([NaN]);
+    expect(col(table, 'fe_below_dl')).toEqual([true]);
+  });
+});

@@ -258,3 +258,22 @@ describe('harmoniseSamples: purity', () => {
     expect(names.slice(t.columnNames().length)).toEqual(['dissolved_fe_quality', 'nitrate_quality', 'phosphate_quality', 'silicate_quality']);
   });
 });
+
+describe('harmoniseSamples: accepted qualities and per-litre limits', () => {
+  it('accept without below_detection drops below-detection values with a ledger row', () => {
+    const t = sampleTable([{ dissolved_fe: NaN, dissolved_fe_below_dl: true, dissolved_fe_dl: 0.05 }]);
+    const { table, entries } = run(t, { accept: ['good', 'questionable'] });
+    expect(col(table, 'dissolved_fe')).toEqual([NaN]);
+    expect(entries.map((e) => [e.reason, e.detail])).toEqual([
+      ['below-detection-excluded', 'dissolved_fe below detection limit: not used (below_detection is not an accepted quality)'],
+    ]);
+  });
+
+  it('converts a per-litre detection limit with the same density before halving it', () => {
+    // ρ(35, 5, 0) = 1027.67547 kg m⁻³ (Fofonoff & Millard 1983); DL 0.1 nmol/L → 100/1027.67547 nmol/kg, halved.
+    const t = sampleTable([{ dissolved_fe: NaN, dissolved_fe_below_dl: true, dissolved_fe_dl: 0.1, temperature: 5 / 1.00024, salinity: 35, depth: NaN, pressure: 0 }]);
+    const { table } = run(t, { units: { dissolved_fe: 'nmol/L' } });
+    expect(col(table, 'dissolved_fe_dl')[0] as number).toBeCloseTo(100 / 1027.67547, 8);
+    expect(col(table, 'dissolved_fe')[0] as number).toBeCloseTo(50 / 1027.67547, 8);
+  });
+});
