@@ -1,9 +1,11 @@
 import * as aq from 'arquero';
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { Ledger } from '../../lib/ledger/index.js';
 import { matchCells } from '../../lib/match/index.js';
 import type { GridSampler } from '../../lib/match/index.js';
 import type { Grid } from '../../lib/types.js';
+import { sampleGrid } from '../../lib/geo/index.js';
 
 interface Bottle {
   station?: string;
@@ -234,5 +236,44 @@ describe('matchCells(cells, samples, grids, options, ledger)', () => {
     const ms = (used.user + used.system) / 1000;
     expect(out.numRows()).toBe(n);
     expect(ms).toBeLessThan(1000);
+  });
+});
+
+describe('matchCells ledger invariant', () => {
+  it('accepts the real lib/geo sampler as its GridSampler', () => {
+    const real: GridSampler = sampleGrid;
+    expect(typeof real).toBe('function');
+  });
+
+  it('keeps every cell or excludes it with exactly one entry, for arbitrary stations and positions', () => {
+    fc.assert(
+      fc.property(
+        fc.array(
+          fc.record({
+            station: fc.constantFrom('S1', 'S2', 'ghost'),
+            depth: fc.oneof(fc.double({ min: 0, max: 300, noNaN: true }), fc.constant(Number.NaN)),
+            positioned: fc.boolean(),
+          }),
+          { maxLength: 30 },
+        ),
+        (rows) => {
+          const input = cells(rows.map((r) => ({ station: r.station, depth: r.depth, lat: r.positioned ? -50 : Number.NaN, lon: r.positioned ? 140 : Number.NaN })));
+          const ledger = new Ledger();
+          const out = matchCells(input, profile, [], {}, ledger);
+          const excluded = ledger.excluded('cells');
+          expect(out.numRows() + excluded.length).toBe(input.numRows());
+          expect(new Set(excluded.map((e) => e.line)).size).toBe(excluded.length);
+          // Only positionless cells of unknown stations leave.
+          expect(excluded.every((e) => e.reason === 'no-position')).toBe(true);
+        },
+      ),
+      { seed: 7, numRuns: 100 },
+    );
+  });
+
+  it('carries the below-detection mark of the matched bottle', () => {
+    const table = profile.derive({ dissolved_fe_below_dl: (d: { depth: number }) => d.depth === 10 });
+    const out = matchCells(cells([{ depth: 12 }, { depth: 30 }]), table, [], {}, new Ledger());
+    expect(out.array('ambient_dissolved_fe_below_dl')).toEqual([true, false]);
   });
 });
