@@ -175,7 +175,7 @@ function fitOne(
       weights,
       level: o.level,
       initial: start,
-      maxIterations: start === undefined ? 100 : 30,
+      maxIterations: start === undefined ? 100 : 0,
     });
     return f.converged ? f : f.reason;
   }

@@ -21,7 +21,7 @@ export interface MichaelisMentenOptions {
   weights?: ArrayLike<number>;
   /** Starting values; default from the Hanes–Woolf line, else a data-range fallback. */
   initial?: { qmax: number; k: number };
-  /** Levenberg–Marquardt iteration limit before Gauss–Newton polishing; default 100. */
+  /** Levenberg–Marquardt iteration limit before Gauss–Newton polishing (0 = Gauss–Newton only, for starts at the optimum); default 100. */
   maxIterations?: number;
   /** Confidence level of the parameter intervals; default 0.95. */
   level?: number;
@@ -119,23 +119,26 @@ export function michaelisMenten(
   };
   const jrow = new Float64Array(2);
   const maxIterations = options.maxIterations ?? 100;
-  let lm: { parameterValues: number[]; iterations: number };
-  try {
-    lm = levenbergMarquardt({ x, y: obs }, model, {
-      initialValues: [q0, k0],
-      weights: Array.from(wt, Math.sqrt),
-      maxIterations,
-      // The library stops only when RSS ≤ errorTolerance; 0 lets it use its iterations, the polish decides convergence.
-      errorTolerance: 0,
-      // K must stay positive for the log model to be defined; the bound is far below any physical value.
-      minValues: [Number.MIN_VALUE, Number.MIN_VALUE],
-      jacobianFunction: (p: number[]) => (xi: number) => {
-        jacobian(p[0], p[1], xi, jrow);
-        return [jrow[0], jrow[1]];
-      },
-    });
-  } catch (error) {
-    return fail(nonFiniteFit(what) + ` (${(error as Error).message})`);
+  let lm: { parameterValues: number[]; iterations: number } = { parameterValues: [q0, k0], iterations: 0 };
+  // maxIterations 0 goes straight to Gauss–Newton: resampling replicates start at the full-data optimum.
+  if (maxIterations > 0) {
+    try {
+      lm = levenbergMarquardt({ x, y: obs }, model, {
+        initialValues: [q0, k0],
+        weights: Array.from(wt, Math.sqrt),
+        maxIterations,
+        // The library stops only when RSS ≤ errorTolerance; 0 lets it use its iterations, the polish decides convergence.
+        errorTolerance: 0,
+        // K must stay positive for the log model to be defined; the bound is far below any physical value.
+        minValues: [Number.MIN_VALUE, Number.MIN_VALUE],
+        jacobianFunction: (p: number[]) => (xi: number) => {
+          jacobian(p[0], p[1], xi, jrow);
+          return [jrow[0], jrow[1]];
+        },
+      });
+    } catch (error) {
+      return fail(nonFiniteFit(what) + ` (${(error as Error).message})`);
+    }
   }
   let q = lm.parameterValues[0];
   let k = lm.parameterValues[1];
