@@ -2,11 +2,12 @@
 import { makeBottles, type Bottle } from './bottles.js';
 import { cellLayout } from './cell-formats.js';
 import { depthKey, makeCells, type Cell } from './cells.js';
-import { climatologyCdl } from './climatology-cdl.js';
+import { gridToCdl } from '../tools/grid-to-cdl.js';
 import { configYaml, type CruiseInputs, type GridInput } from './config-yaml.js';
 import { delimitedText } from './delimited-text.js';
 import { SAMPLE_FAULTS, SWAPPED_STATION, injectCellFaults, injectSampleFaults, locateFaults, type CellRow, type FaultRecord, type SampleRow } from './faults.js';
 import { makeRng } from './rng.js';
+import { rotateLon360 } from './rotate-lon-360.js';
 import { sampleLayout } from './sample-formats.js';
 import { CRUISES, type Cruise } from './scenario.js';
 import { silicateCsvGrid } from './silicate-csv-grid.js';
@@ -100,23 +101,33 @@ function buildCruise(cruise: Cruise, index: number, files: Map<string, string>):
 
 /** Grid inputs of the demo and their files. */
 function buildGrids(files: Map<string, string>, netcdf: DemoFiles['netcdf']): GridInput[] {
+  // dFe is written per litre so that its CF standard name (a per-volume concentration) is honest; the reader converts
+  // with its default density, hence the factor 1.025 kg/L here. Its longitudes run 0–360.
   const specs = [
-    { name: 'dfe_climatology', quantity: 'dissolved_fe', variable: 'dfe', units: 'nmol/kg', cfUnits: 'nmol kg-1', longName: 'dissolved iron', lon360: true },
-    { name: 'nitrate_climatology', quantity: 'nitrate', variable: 'nitrate', units: 'µmol/kg', cfUnits: 'umol kg-1', longName: 'nitrate', standardName: 'moles_of_nitrate_per_unit_mass_in_sea_water', lon360: false },
-    { name: 'phosphate_climatology', quantity: 'phosphate', variable: 'phosphate', units: 'µmol/kg', cfUnits: 'umol kg-1', longName: 'phosphate', standardName: 'moles_of_phosphate_per_unit_mass_in_sea_water', lon360: false },
+    { name: 'dfe_climatology', quantity: 'dissolved_fe', variable: 'dfe', units: 'nmol/kg', cfUnits: 'nmol L-1', scale: 1.025, longName: 'dissolved iron', standardName: 'mole_concentration_of_dissolved_iron_in_sea_water', lon360: true },
+    { name: 'nitrate_climatology', quantity: 'nitrate', variable: 'nitrate', units: 'µmol/kg', cfUnits: 'umol kg-1', scale: 1, longName: 'nitrate', standardName: 'moles_of_nitrate_per_unit_mass_in_sea_water', lon360: false },
+    { name: 'phosphate_climatology', quantity: 'phosphate', variable: 'phosphate', units: 'µmol/kg', cfUnits: 'umol kg-1', scale: 1, longName: 'phosphate', standardName: 'moles_of_phosphate_per_unit_mass_in_sea_water', lon360: false },
   ] as const;
   const out: GridInput[] = [];
   for (const s of specs) {
     const cdl = `grids/${s.name}.cdl`;
     const nc = `grids/${s.name}.nc`;
-    const grid = truthGrid(s.quantity, { stepDeg: 5, depths: GRID_DEPTHS, units: s.units, source: nc, variable: s.variable });
-    files.set(cdl, climatologyCdl(grid, {
-      name: s.name, units: s.cfUnits, longName: `${s.longName}, monthly climatology (invented demo field)`, standardName: 'standardName' in s ? s.standardName : undefined, lon360: s.lon360,
+    const grid = truthGrid(s.quantity, { stepDeg: 5, depths: GRID_DEPTHS, units: s.units, source: nc, variable: s.variable, scale: s.scale });
+    files.set(cdl, gridToCdl(s.lon360 ? rotateLon360(grid) : grid, {
       title: `Demo ${s.longName} climatology, 5 degree grid`,
-      comment: 'Invented field for the basinquota demo, sampled from the same smooth truth fields as the demo bottles; land is _FillValue.',
+      variableName: s.variable,
+      standardName: s.standardName,
+      units: s.cfUnits,
+      longName: `${s.longName}, monthly climatology (invented demo field)`,
+      datasetName: s.name,
+      climatologyYears: [2000, 2020],
+      globalAttributes: {
+        comment: 'Invented field for the basinquota demo, sampled from the same smooth truth fields as the demo bottles; land is _FillValue.',
+        source: 'data/generate-demo.ts (seeded, invented demo data)',
+      },
     }));
     netcdf.push({ cdl, nc });
-    out.push({ path: nc, quantity: s.quantity, variable: s.variable, note: `${s.longName}: 5° grid, 10 depths, 12 months${s.lon360 ? '; longitudes 0–360' : ''}.` });
+    out.push({ path: nc, quantity: s.quantity, variable: s.variable, note: `${s.longName}: 5° grid, 10 depths, 12 months${s.lon360 ? '; in nmol/L with longitudes 0–360' : ''}.` });
   }
   const csv = 'grids/silicate_10deg.csv';
   files.set(csv, silicateCsvGrid());

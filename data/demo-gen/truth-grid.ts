@@ -24,9 +24,11 @@ export interface TruthGridOptions {
   source: string;
   /** Variable name. */
   variable: string;
+  /** Factor applied to the canonical values, e.g. 1.025 kg/L to write per litre; default 1. */
+  scale?: number;
 }
 
-/** A 12-month climatology of `quantity` with longitudes in [-180, 180), values rounded to 4 significant digits. */
+/** A 12-month climatology of `quantity` (times `scale`) with longitudes in [-180, 180), values rounded to 4 significant digits. */
 export function truthGrid(quantity: FieldQuantity, options: TruthGridOptions): Grid {
   const lon = centres(180, options.stepDeg);
   const lat = centres(90, options.stepDeg);
@@ -36,12 +38,13 @@ export function truthGrid(quantity: FieldQuantity, options: TruthGridOptions): G
   const wet = new Uint8Array(lon.length * lat.length);
   for (let y = 0; y < lat.length; y++) for (let x = 0; x < lon.length; x++) wet[y * lon.length + x] = land.insideLand(lon[x], lat[y]) ? 0 : 1;
   const values = new Float32Array(time.length * depth.length * lat.length * lon.length);
+  const scale = options.scale ?? 1;
   let i = 0;
   for (let t = 0; t < time.length; t++) {
     for (let z = 0; z < depth.length; z++) {
       for (let y = 0; y < lat.length; y++) {
         for (let x = 0; x < lon.length; x++) {
-          values[i++] = wet[y * lon.length + x] ? Number(truthField(quantity, lon[x], lat[y], depth[z], time[t]).toPrecision(4)) : NaN;
+          values[i++] = wet[y * lon.length + x] ? Number((scale * truthField(quantity, lon[x], lat[y], depth[z], time[t])).toPrecision(4)) : NaN;
         }
       }
     }

@@ -11,6 +11,7 @@ import { harmoniseSamples } from '../../lib/harmonise/index.js';
 import { Ledger } from '../../lib/ledger/index.js';
 import { readTable } from '../../lib/load/index.js';
 import { validateUnit } from '../../lib/units/index.js';
+import { truthField } from '../../data/demo-gen/truth-fields.js';
 
 const committed = fileURLToPath(new URL('../../data/demo/', import.meta.url));
 const ncgen = hasNcgen();
@@ -167,6 +168,10 @@ describe('demo grids', () => {
     const nan = [...g.values].filter(Number.isNaN).length;
     expect(nan / g.values.length).toBeGreaterThan(0.2);
     expect(nan / g.values.length).toBeLessThan(0.45);
+    // Node 30° W, 17.5° N, 100 m, May: written in nmol/L ×1.025 and read back with the reader's 1025 kg/m³.
+    const [x, y, z, t] = [g.lon.indexOf(-27.5), g.lat.indexOf(17.5), 4, 4];
+    const value = g.values[((t * 10 + z) * 36 + y) * 72 + x];
+    expect(value).toBeCloseTo(truthField('dissolved_fe', -27.5, 17.5, 100, 5), 3);
   });
 
   it('readCsvGrid reads the silicate CSV grid', () => {
