@@ -96,9 +96,9 @@ export function harmoniseSamples(table: aq.ColumnTable, options: SampleHarmonise
     for (const i of kept) {
       const needed = perVolume.filter((q) => Number.isFinite(col(q)[i]) || Number.isFinite(col(`${q}_dl`)[i]));
       if (needed.length === 0) continue;
-      // Bottle temperatures are taken as ITS-90 (common practice since 1990) and converted for EOS-80.
       if (Number.isFinite(temperature[i]) && Number.isFinite(salinity[i]) && Number.isFinite(seaPressure[i])) {
-        density[i] = seawaterDensity(salinity[i], t68FromT90(temperature[i]), Math.max(0, seaPressure[i]));
+        const t68 = options.temperatureScale === 'ipts68' ? temperature[i] : t68FromT90(temperature[i]);
+        density[i] = seawaterDensity(salinity[i], t68, Math.max(0, seaPressure[i]));
       } else {
         density[i] = rhoDefault;
         defaulted[i] = 1;

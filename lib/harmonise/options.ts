@@ -41,6 +41,8 @@ export interface SampleHarmoniseOptions extends CommonHarmoniseOptions {
   defaultDetectionLimits?: Partial<Record<SampleQuantity, number>>;
   /** Density when temperature, salinity or pressure is missing, kg m⁻³; default DEFAULT_DENSITY (1025). */
   defaultDensity?: number;
+  /** Temperature scale of the file: 'its90' (default, common practice since 1990; converted to IPTS-68 for EOS-80) or 'ipts68'. */
+  temperatureScale?: 'its90' | 'ipts68';
   /** Largest allowed difference between the given depth and the depth computed from pressure, m; default 10. */
   depthPressureToleranceM?: number;
 }

@@ -277,3 +277,13 @@ describe('harmoniseSamples: accepted qualities and per-litre limits', () => {
     expect(col(table, 'dissolved_fe')[0] as number).toBeCloseTo(50 / 1027.67547, 8);
   });
 });
+
+describe('harmoniseSamples: temperature scale', () => {
+  it('temperatureScale "ipts68" feeds the temperature to EOS-80 unchanged', () => {
+    // ρ(35, 25, 0) = 1023.34306 kg m⁻³ with T68 = 25 (Fofonoff & Millard 1983 check value).
+    const t = sampleTable([{ dissolved_fe: 1, temperature: 25, salinity: 35, depth: NaN, pressure: 0 }]);
+    expect(col(run(t, { units: { dissolved_fe: 'nmol/L' }, temperatureScale: 'ipts68' }).table, 'dissolved_fe')[0] as number).toBeCloseTo(1000 / 1023.34306, 8);
+    // Read as ITS-90, 25 °C is T68 = 25.006, a slightly lighter water: the result differs.
+    expect(col(run(t, { units: { dissolved_fe: 'nmol/L' } }).table, 'dissolved_fe')[0] as number).not.toBeCloseTo(1000 / 1023.34306, 8);
+  });
+});
