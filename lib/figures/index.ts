@@ -6,3 +6,6 @@ export { SINGLE_COLUMN_MM, DOUBLE_COLUMN_MM, PNG_DPIS, mmToCssPx, pngWidthPx } f
 export { OKABE_ITO, SEQUENTIAL_SCHEME, SEQUENTIAL_ALT_SCHEME, DIVERGING_SCHEME, NEUTRALS, categoricalColour } from './palettes.js';
 export { themeConfig, THEME_SIZES, THEME_STROKES } from './theme.js';
 export { figureCsv, type Figure, type CsvColumn, type CsvValue } from './figure.js';
+export * from './maps/index.js';
+export * from './plots/index.js';
+export { gridLevel, sampleNearest, sampleBilinear, type LatticeField, type LevelChoice } from './raster-sample.js';
