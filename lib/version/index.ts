@@ -4,6 +4,7 @@ export { sha256 } from './sha256.js';
 export { compareText } from './compare-text.js';
 export { buildManifest, inputsHash, type Manifest, type ManifestFile, type ManifestInput } from './manifest.js';
 export { parseManifest } from './parse-manifest.js';
+export { parseSnapshot } from './parse-snapshot.js';
 export { nextVersion, type ArchivedManifest, type NextVersion } from './next-version.js';
 export type { VersionSnapshot, SnapshotParameter, SnapshotRegion } from './snapshot.js';
 export type { ChangesSection, VersionRef, ParameterValue, ParameterChange, RegionChange, RegionChangeKind, StationChange, HoldingChange, LedgerChange } from './changes-section.js';

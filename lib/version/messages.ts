@@ -20,3 +20,6 @@ export const archiveConflict = (dir: string): string => `${dir} already exists a
 
 /** Wrong number of arguments to diff. */
 export const diffUsage = (): string => 'usage: basinquota diff VA VB [DIR]   (versions as v1 or 1)';
+
+/** A snapshot whose version disagrees with its folder. */
+export const snapshotVersionMismatch = (folder: number, inFile: number): string => `it says version ${inFile} but lives in the folder of version ${folder}`;
