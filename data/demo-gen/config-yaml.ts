@@ -1,5 +1,5 @@
 /** The demo project's basinquota.yaml, written as commented text so users can read it as an example. */
-import { AUTHORS, CONTACT, PROGRAMME, REPORT_TITLE, SHIPS, type Cruise } from './scenario.js';
+import { AUTHORS, BASIN_NAMES, CONTACT, PROGRAMME, REPORT_TITLE, SHIPS, type Cruise } from './scenario.js';
 
 /** One cruise's input files as the config lists them. */
 export interface CruiseInputs {
@@ -63,7 +63,7 @@ export function configYaml(inputs: readonly CruiseInputs[], grids: readonly Grid
   ];
   for (const { cruise, samples } of used) {
     out.push(
-      `    # ${cruise.id}, ${shipName(cruise.ship)}, ${cruise.basin.replace('-', ' ')}, from ${cruise.start}.${samples.units.dissolved_fe?.includes('L') ? ' Per-litre units: converted with in-situ density from T, S and pressure.' : ''}`,
+      `    # ${cruise.id}, ${shipName(cruise.ship)}, ${BASIN_NAMES[cruise.basin]}, from ${cruise.start}.${samples.units.dissolved_fe?.includes('L') ? ' Per-litre units: converted with in-situ density from T, S and pressure.' : ''}`,
       `    - path: ${q(samples.path)}`,
       '      columns:',
       ...map('        ', samples.columns),

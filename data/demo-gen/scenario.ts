@@ -35,7 +35,7 @@ export interface Cruise {
 export const PROGRAMME = 'Interbasin Cellular Iron Quota Survey (ICIQS), an invented programme for this demo';
 
 /** Report title of the demo. */
-export const REPORT_TITLE = 'Phytoplankton iron quotas across five ocean basins, 2021–2024: ICIQS demo synthesis';
+export const REPORT_TITLE = 'Phytoplankton iron quotas across ocean basins: ICIQS demo synthesis';
 
 /** Invented authors of the demo report. */
 export const AUTHORS = ['Ilse Varnhagen', 'Tomasz Ellory-Okafor', 'Ruth Kanemoto', 'Dario Fenwick-Silva'];
@@ -90,6 +90,15 @@ export const CRUISES: readonly Cruise[] = [
     stations: [[-10.0, 80.0], [-14.0, 76.0], [-18.0, 72.0], [-22.0, 68.0], [-26.0, 74.0], [-30.0, 80.0], [-26.0, 86.0], [-22.0, 90.0], [-18.0, 95.0], [-14.0, 90.0]],
   },
 ];
+
+/** Basin names as the report and comments write them. */
+export const BASIN_NAMES: Readonly<Record<Basin, string>> = {
+  'north-atlantic': 'North Atlantic',
+  'south-atlantic': 'South Atlantic',
+  'north-pacific': 'North Pacific',
+  'southern-ocean': 'Southern Ocean',
+  indian: 'Indian Ocean',
+};
 
 /** Bottle depths of every cast (m), shallow to deep. */
 export const BOTTLE_DEPTHS = [10, 25, 50, 75, 100, 150, 200, 500, 1000, 1500, 2500, 4000] as const;
