@@ -1,20 +1,28 @@
 // The whole pure pipeline: load → harmonise → match → quotas → fits → anomalies; tables in, tables and results out.
 import type * as aq from 'arquero';
+import { fitQuotas, residualsFromFit, type FitInput, type FitResults } from '../fits/index.js';
+import type { HarmoniseSummary } from '../harmonise/index.js';
 import { Ledger } from '../ledger/index.js';
+import { crossoverOffsets, matchCells, type CruiseOffset, type StationPairDifference } from '../match/index.js';
+import { computeQuotas } from '../quotas/index.js';
 import type { Problem } from '../types.js';
+import { harmoniseTables } from './harmonise-tables.js';
 import { concatTables, loadTables, type FileCount } from './load-tables.js';
 import type { ProjectInputs } from './project-inputs.js';
 import { silentProgress, type Progress } from './progress.js';
-import { harmoniseTables, type HarmonisedTables } from './harmonise-tables.js';
-import type { HarmoniseSummary } from '../harmonise/index.js';
+import { readGrids, type QuantityGrid } from './read-grids.js';
 import { stageProblem } from './stage-problem.js';
+import { crossoverOptions, fitOptions, matchOptions, quotaOptions } from './stage-options.js';
+import { withColumn } from './with-column.js';
 
-/** What a pipeline run produced. When `problems` holds an error, later stages did not run. */
+/** What a pipeline run produced. When `problems` holds an error, later stages did not run and their fields are empty. */
 export interface PipelineResult {
   /** Harmonised bottle samples. */
   samples: aq.ColumnTable;
-  /** Cells, as far as the pipeline got. */
+  /** The merged cell table: matched, with quotas and residuals, as far as the pipeline got. */
   cells: aq.ColumnTable;
+  /** Gridded fields in canonical units. */
+  grids: QuantityGrid[];
   /** Every row excluded, converted or flagged. */
   ledger: Ledger;
   /** Rows read per input file. */
@@ -23,30 +31,104 @@ export interface PipelineResult {
   problems: Problem[];
   /** Per-file harmonise summaries (conversions, substitutions). */
   harmonise: HarmoniseSummary[];
+  /** Cross-cruise dFe comparison. */
+  crossover: { pairs: StationPairDifference[]; offsets: CruiseOffset[] };
+  /** Fits of Fe:C on dFe per class, or null when not reached. */
+  fits: FitResults | null;
 }
 
 /** Run every stage on in-memory inputs. */
 export function runPipeline(inputs: ProjectInputs, progress: Progress = silentProgress): PipelineResult {
+  const { config } = inputs;
   const ledger = new Ledger();
+  const knownFiles = [...inputs.files.keys()];
+  const result: PipelineResult = {
+    samples: concatTables([]),
+    cells: concatTables([]),
+    grids: [],
+    ledger,
+    counts: [],
+    problems: [],
+    harmonise: [],
+    crossover: { pairs: [], offsets: [] },
+    fits: null,
+  };
+  const failed = (error: unknown): PipelineResult => {
+    result.problems.push(stageProblem(error, inputs.configFile, knownFiles));
+    return result;
+  };
+
   progress.start('load');
-  const loaded = loadTables(inputs.config, inputs.files, ledger);
+  const loaded = loadTables(config, inputs.files, ledger);
+  result.counts = loaded.counts;
+  result.problems.push(...loaded.problems);
   const rowsRead = loaded.counts.reduce((s, c) => s + c.rowsRead, 0);
   const rowsLoaded = [...loaded.samples, ...loaded.cells].reduce((s, t) => s + t.numRows(), 0);
+  const gridsRead = readGrids(config, inputs.files, ledger);
+  result.grids = gridsRead.grids;
+  result.problems.push(...gridsRead.problems);
   progress.end('load', rowsRead, rowsLoaded);
-  const base = { ledger, counts: loaded.counts, problems: loaded.problems, harmonise: [] };
-  if (hasErrors(loaded.problems)) return { ...base, samples: concatTables(loaded.samples), cells: concatTables(loaded.cells) };
+  result.samples = concatTables(loaded.samples);
+  result.cells = concatTables(loaded.cells);
+  if (hasErrors(result.problems)) return result;
 
   progress.start('harmonise');
-  let harmonised: HarmonisedTables;
   try {
-    harmonised = harmoniseTables(inputs.config, loaded.samples, loaded.cells, ledger);
+    const harmonised = harmoniseTables(config, loaded.samples, loaded.cells, ledger);
+    result.harmonise = harmonised.summaries;
+    result.samples = concatTables(harmonised.samples);
+    result.cells = concatTables(harmonised.cells);
   } catch (error) {
-    return { ...base, samples: concatTables(loaded.samples), cells: concatTables(loaded.cells), problems: [...loaded.problems, stageProblem(error, inputs.configFile)] };
+    return failed(error);
   }
-  const samples = concatTables(harmonised.samples);
-  const cells = concatTables(harmonised.cells);
-  progress.end('harmonise', rowsLoaded, samples.numRows() + cells.numRows());
-  return { ...base, samples, cells, harmonise: harmonised.summaries };
+  progress.end('harmonise', rowsLoaded, result.samples.numRows() + result.cells.numRows());
+
+  progress.start('match');
+  const cellsIn = result.cells.numRows();
+  try {
+    result.cells = matchCells(result.cells, result.samples, result.grids, matchOptions(config), ledger);
+    result.crossover = crossoverOffsets(result.samples, crossoverOptions(config));
+  } catch (error) {
+    return failed(error);
+  }
+  progress.end('match', cellsIn, result.cells.numRows());
+
+  progress.start('quotas');
+  const matched = result.cells.numRows();
+  try {
+    result.cells = computeQuotas(result.cells, quotaOptions(config), ledger);
+  } catch (error) {
+    return failed(error);
+  }
+  progress.end('quotas', matched, result.cells.numRows());
+
+  progress.start('fits');
+  const input = fitInput(result.cells);
+  result.fits = fitQuotas(input, fitOptions(config));
+  const lines = result.cells.array('source_line') as ArrayLike<number>;
+  const files = result.cells.array('source_file') as ArrayLike<string>;
+  for (const e of result.fits.excluded) {
+    ledger.add({ table: 'cells', file: files[e.index], line: lines[e.index], stage: 'fits', action: 'flagged', reason: e.reason, detail: e.detail });
+  }
+  result.cells = withColumn(result.cells, 'residual_log10', residualsFromFit(input, result.fits));
+  progress.end('fits', result.cells.numRows(), result.fits.classes.filter((c) => c.fitted).length);
+  return result;
+}
+
+/** The fits stage's view of the merged cell table. */
+export function fitInput(cells: aq.ColumnTable): FitInput {
+  const n = cells.numRows();
+  const cruise = cells.array('cruise') as ArrayLike<string>;
+  const station = cells.array('station') as ArrayLike<string>;
+  const stationKey: string[] = new Array(n);
+  for (let i = 0; i < n; i++) stationKey[i] = `${cruise[i]} ${station[i]}`;
+  return {
+    cellClass: Array.from(cells.array('class') as ArrayLike<string>),
+    station: stationKey,
+    dFe: cells.array('ambient_dissolved_fe') as ArrayLike<number>,
+    feC: cells.array('fe_c') as ArrayLike<number>,
+    feCSigma: cells.array('fe_c_sigma') as ArrayLike<number>,
+  };
 }
 
 /** True when any problem is an error. */

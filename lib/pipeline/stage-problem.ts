@@ -1,29 +1,22 @@
-// Errors a stage throws for bad input become problems with a location; anything else is a bug and is rethrown.
+// Errors a stage throws for input it cannot accept become located problems; programming errors are rethrown.
 import type { Problem } from '../types.js';
 
-/** An error that already names its file and line, thrown by a stage for input it cannot accept. */
-export class InputError extends Error {
-  constructor(
-    readonly file: string,
-    readonly line: number,
-    readonly col: number,
-    message: string,
-    options?: { cause?: unknown },
-  ) {
-    super(message, options);
-    this.name = 'InputError';
-  }
-}
+/** Error kinds that mean a bug in basinquota, never bad input. */
+const BUG_ERRORS = new Set(['TypeError', 'RangeError', 'ReferenceError', 'SyntaxError']);
 
-/** Turn a thrown stage error into a Problem: InputError keeps its location; other errors with a message name the config file. */
-export function stageProblem(error: unknown, fallbackFile: string): Problem {
-  if (error instanceof InputError) return { file: error.file, line: error.line, col: error.col, message: error.message, severity: 'error' };
-  const e = error as { file?: unknown; line?: unknown; col?: unknown; message?: unknown };
-  if (typeof e?.file === 'string' && typeof e.message === 'string') {
-    return { file: e.file, line: typeof e.line === 'number' ? e.line : 0, col: typeof e.col === 'number' ? e.col : 0, message: e.message, severity: 'error' };
+/**
+ * Turn a thrown stage error into a Problem. Stage messages begin with the file they concern
+ * (`file: …` or `file:line: …`); that prefix becomes the location. Anything else names `fallbackFile`.
+ */
+export function stageProblem(error: unknown, fallbackFile: string, knownFiles: readonly string[] = []): Problem {
+  if (!(error instanceof Error) || BUG_ERRORS.has(error.name)) throw error;
+  const message = error.message;
+  for (const file of [...knownFiles, fallbackFile].sort((a, b) => b.length - a.length)) {
+    if (!message.startsWith(`${file}:`)) continue;
+    const rest = message.slice(file.length + 1);
+    const m = /^(\d+)(?::(\d+))?:\s*/.exec(rest);
+    if (m) return { file, line: Number(m[1]), col: m[2] ? Number(m[2]) : 0, message: rest.slice(m[0].length), severity: 'error' };
+    return { file, line: 0, col: 0, message: rest.trimStart(), severity: 'error' };
   }
-  if (error instanceof Error && error.name !== 'Error' && error.name !== 'TypeError' && error.name !== 'RangeError') {
-    return { file: fallbackFile, line: 0, col: 0, message: error.message, severity: 'error' };
-  }
-  throw error;
+  return { file: fallbackFile, line: 0, col: 0, message, severity: 'error' };
 }
