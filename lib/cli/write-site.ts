@@ -2,16 +2,10 @@
 import { existsSync, mkdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import Eleventy from '@11ty/eleventy';
-import type { ReportModel } from '../site/index.js';
+import type { ExtraFile, ReportModel } from '../site/index.js';
 import { PACKAGE_ROOT } from './package-info.js';
 
-/** A file the build writes besides the pages (figures, CSV, zip), path relative to the site root. */
-export interface ExtraFile {
-  /** Path inside the site, with forward slashes. */
-  path: string;
-  /** Content. */
-  data: string | Uint8Array;
-}
+export type { ExtraFile };
 
 /** Write the whole site to `outDir` atomically: build in `outDir.tmp-<pid>`, then rename over the old site. */
 export async function writeSite(report: ReportModel, extras: ExtraFile[], outDirArg: string): Promise<void> {
