@@ -31,15 +31,15 @@ function depletedLayer(lat: number): number {
   return 60 * (1 - southern(lat)) * (1 - 0.6 * subpolarNorth(lat));
 }
 
-/** Surface dFe (nmol/kg): Saharan dust plume high, subtropical Pacific and Southern Ocean very low. */
+/** Surface dFe (nmol/kg): Saharan dust plume high, subtropical Pacific and Southern Ocean very low, a mid-range South Atlantic (so its low-iron cells are not confounded with low dFe). */
 function surfaceFe(lat: number, lon: number): number {
   const fe =
     0.1 +
     0.4 * bump(lat, lon, 19, -30, 9, 22) +
     0.12 * bump(lat, lon, 46, -25, 8, 22) +
     0.05 * bump(lat, lon, -15, 80, 12, 25) -
-    0.09 * bump(lat, lon, 24, -140, 13, 35) -
-    0.04 * bump(lat, lon, -25, -12, 10, 22) -
+    0.09 * bump(lat, lon, 24, -140, 13, 35) +
+    0.02 * bump(lat, lon, -25, -12, 10, 22) -
     0.05 * southern(lat);
   return Math.max(0.012, fe);
 }

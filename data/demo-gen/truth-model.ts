@@ -16,7 +16,7 @@ export const CLASS_LAWS: Readonly<Record<PhytoClass, { intercept: number; expone
 };
 
 /** Standard deviation of the per-station random effect on log10 Fe:C (shared by all classes of a station). */
-export const STATION_SD_LOG10 = 0.05;
+export const STATION_SD_LOG10 = 0.1;
 
 /** Standard deviation of the per-cell scatter on log10 Fe:C. */
 export const CELL_SD_LOG10 = 0.12;

@@ -14,6 +14,9 @@ import { readGrids, type QuantityGrid } from './read-grids.js';
 import { stageProblem } from './stage-problem.js';
 import { crossoverOptions, fitOptions, matchOptions, quotaOptions } from './stage-options.js';
 import { withColumn } from './with-column.js';
+import { anomalyStage, regionScheme } from './anomaly-stage.js';
+import type { AnomalyResults } from '../anomalies/index.js';
+import type { RegionCollection } from '../geo/regions/index.js';
 
 /** What a pipeline run produced. When `problems` holds an error, later stages did not run and their fields are empty. */
 export interface PipelineResult {
@@ -35,6 +38,10 @@ export interface PipelineResult {
   crossover: { pairs: StationPairDifference[]; offsets: CruiseOffset[] };
   /** Fits of Fe:C on dFe per class, or null when not reached. */
   fits: FitResults | null;
+  /** The region scheme used. */
+  regions: RegionCollection | null;
+  /** Region × class anomaly tests, or null when not reached. */
+  anomalies: AnomalyResults | null;
 }
 
 /** Run every stage on in-memory inputs. */
@@ -52,6 +59,8 @@ export function runPipeline(inputs: ProjectInputs, progress: Progress = silentPr
     harmonise: [],
     crossover: { pairs: [], offsets: [] },
     fits: null,
+    regions: null,
+    anomalies: null,
   };
   const failed = (error: unknown): PipelineResult => {
     result.problems.push(stageProblem(error, inputs.configFile, knownFiles));
@@ -112,6 +121,17 @@ export function runPipeline(inputs: ProjectInputs, progress: Progress = silentPr
   }
   result.cells = withColumn(result.cells, 'residual_log10', residualsFromFit(input, result.fits));
   progress.end('fits', result.cells.numRows(), result.fits.classes.filter((c) => c.fitted).length);
+
+  progress.start('anomalies');
+  try {
+    result.regions = regionScheme(config, inputs.files);
+    const stage = anomalyStage(result.cells, result.regions, config, ledger);
+    result.cells = withColumn(result.cells, 'region', stage.regionIds);
+    result.anomalies = stage.results;
+  } catch (error) {
+    return failed(error);
+  }
+  progress.end('anomalies', result.cells.numRows(), result.anomalies.groups.length);
   return result;
 }
 
