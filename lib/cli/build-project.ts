@@ -1,13 +1,16 @@
-// `basinquota build`: read, run the pipeline, model the report, write the site atomically.
+// `basinquota build`: read, run the pipeline, number the version, model the report, write the site atomically, archive.
 import { join } from 'node:path';
 import { hasErrors, runPipeline, type PipelineResult } from '../pipeline/index.js';
-import { buildReportModel, type ReportModel } from '../site/index.js';
+import { buildReportModel, buildResults, buildSnapshot, type ReportModel } from '../site/index.js';
+import { buildManifest, diffSnapshots, firstVersionChanges, nextVersion, prettyJson } from '../version/index.js';
+import { ArchiveError, archivedSiteFiles, readArchive, writeArchiveVersion } from './archive.js';
 import { buildDate } from './build-date.js';
 import { formatProblem } from './format-problem.js';
 import { packageVersion } from './package-info.js';
 import { progressPrinter } from './progress-printer.js';
 import { readProject } from './read-project.js';
-import { supplementFiles } from './supplement-files.js';
+import { reportExtras } from './report-extras.js';
+import { summaryLines } from './summary-lines.js';
 import { writeSite } from './write-site.js';
 
 /** Options of one build. */
@@ -38,18 +41,51 @@ export async function buildProject(options: BuildOptions): Promise<BuildOutcome>
   const project = readProject(options.dir, options.config);
   for (const p of project.problems) log(formatProblem(p));
   if (!project.inputs) return { code: 1 };
+  const inputs = project.inputs;
   log(`basinquota build ${project.dir}`);
-  const result = runPipeline(project.inputs, progressPrinter(log));
+  const result = runPipeline(inputs, progressPrinter(log));
   for (const p of result.problems) log(formatProblem(p));
   if (hasErrors(result.problems)) return { code: 1, result };
-  const report = buildReportModel(project.inputs.config, result, { version: 1, date: buildDate(result), toolVersion: packageVersion() });
+
+  let archive;
+  try {
+    archive = readArchive(project.dir);
+  } catch (error) {
+    if (error instanceof ArchiveError) {
+      log(error.message);
+      return { code: 1, result };
+    }
+    throw error;
+  }
+  const results = buildResults(result);
+  const manifest = buildManifest({
+    configText: inputs.configText,
+    files: [...inputs.files.values()].map((f) => ({ path: f.name, bytes: f.bytes })),
+    packageVersion: packageVersion(),
+    nodeVersion: process.version,
+    results,
+  });
+  const next = nextVersion(manifest, archive);
+  const date = buildDate(result);
+  const snapshot = buildSnapshot(result, next.version, date);
+  const previous = archive.find((a) => a.version === next.previous);
+  const report = buildReportModel(inputs.config, result, { version: next.version, date, toolVersion: packageVersion() });
+  report.sections.changes = previous ? diffSnapshots(previous.snapshot, snapshot) : firstVersionChanges(snapshot);
+  report.pages.push('changes.html');
+  const extras = await reportExtras(report, result, inputs.config, prettyJson(results));
   const out = options.out ?? join(project.dir, '_site');
   try {
-    await writeSite(report, supplementFiles(result), out);
+    await writeSite(report, [...extras, ...archivedSiteFiles(project.dir, next.version)], out);
+    writeArchiveVersion(project.dir, next.version, { manifest, snapshot, results, siteDir: out });
   } catch (error) {
+    if (error instanceof ArchiveError) {
+      log(error.message);
+      return { code: 1, report, result };
+    }
     log(`cannot write the site to ${out}: ${error instanceof Error ? error.message : String(error)}`);
     return { code: 3, report, result };
   }
-  log(`wrote ${out}`);
+  for (const line of summaryLines(report, result)) log(line);
+  log(`wrote version ${next.version} to ${out}${next.changed ? '' : ' (inputs unchanged)'}`);
   return { code: 0, report, result };
 }

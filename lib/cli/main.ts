@@ -1,12 +1,13 @@
 #!/usr/bin/env node
 // The basinquota command line: the only shell around the pure core.
 import { parseArgs } from 'node:util';
-import { join } from 'node:path';
 import { buildProject } from './build-project.js';
 import { checkProject } from './check-project.js';
 import { initProject } from './init-project.js';
 import * as msg from './messages.js';
-import { PACKAGE_ROOT } from './package-info.js';
+import { demoCommand } from './demo-command.js';
+import { diffCommand } from './diff-command.js';
+import { versionMessages } from '../version/index.js';
 
 const log = (line: string): void => {
   process.stderr.write(`${line}\n`);
@@ -42,10 +43,14 @@ export async function main(argv: string[]): Promise<number> {
       return checkProject(positionals[0] ?? '.', values.config, log);
     case 'build':
       return (await buildProject({ dir: positionals[0] ?? '.', config: values.config, out: values.out, log })).code;
-    case 'demo': {
-      const demo = join(PACKAGE_ROOT, 'data', 'demo');
-      return (await buildProject({ dir: demo, out: values.out ?? join(PACKAGE_ROOT, '_site-demo'), log })).code;
-    }
+    case 'diff':
+      if (positionals.length < 2 || positionals.length > 3) {
+        log(versionMessages.diffUsage());
+        return 2;
+      }
+      return diffCommand(positionals[2] ?? '.', positionals[0], positionals[1], log);
+    case 'demo':
+      return demoCommand(values.out, log);
     default:
       log(msg.unknownCommand(command));
       return 2;

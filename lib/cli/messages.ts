@@ -8,6 +8,8 @@ Usage:
   basinquota check [DIR]         validate the config and every input; exit 1 on any error
   basinquota build [DIR] [--out DIR] [--config FILE]
                                  run the pipeline and write the report site
+  basinquota diff VA VB [DIR]    what changed between two archived versions (e.g. v1 v2)
+  basinquota demo [--out DIR]    build the shipped demo's two versions (default into _site-demo)
   basinquota --help | COMMAND --help
 
 Exit codes: 0 success, 1 invalid config or input (messages as file:line:col), 2 wrong usage, 3 internal or disk error.
@@ -27,6 +29,16 @@ export const commandHelp: Record<string, string> = {
   Run the pipeline on the project in DIR (default .) and write the report site to --out (default DIR/_site).
   The site is written to a temporary folder and swapped in only when the build succeeds.
   Progress per stage goes to stderr. Exit 1 on invalid input, 3 on a disk error.
+  The report version increases when the inputs, the config or the basinquota version changed since the
+  latest version archived in DIR/archive/; an unchanged rebuild keeps the number and the bytes.
+`,
+  diff: `basinquota diff VA VB [DIR]
+  Print what changed between two archived versions of the project in DIR (default .): data added or
+  removed, fit parameters that moved (and whether beyond their interval), regions flagged or cleared.
+  Exit 0, 1 for a corrupt archive, 2 for an unknown version.
+`,
+  demo: `basinquota demo [--out DIR]
+  Build the demo project shipped in data/demo as version 1 and then version 2 into DIR (default _site-demo).
 `,
 };
 

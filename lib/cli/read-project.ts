@@ -52,5 +52,5 @@ export function readProject(dirArg: string, configName = 'basinquota.yaml'): Rea
     files.set(path, { name: path, bytes: new Uint8Array(readFileSync(real)) });
   }
   if (problems.some((p) => p.severity === 'error')) return { dir, problems };
-  return { dir, inputs: { configFile, config, files }, problems };
+  return { dir, inputs: { configFile, config, configText: text, files }, problems };
 }

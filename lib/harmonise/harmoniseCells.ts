@@ -56,7 +56,8 @@ export function harmoniseCells(table: aq.ColumnTable, options: CellHarmoniseOpti
   replaceFillValues(num, options.fillValues ?? DEFAULT_FILL_VALUES, rows);
   const nan = new Float64Array(n).fill(NaN);
   const lat = num.lat ?? nan.slice(), lon = num.lon ?? nan.slice();
-  checkPositionRange(lat, lon, rows);
+  // Cells usually take their station's position in the match stage, which ledgers the ones it cannot place.
+  checkPositionRange(lat, lon, rows, false);
   const depthConv = conversions.get('depth');
   if (num.depth && depthConv && !isIdentity(depthConv)) for (let i = 0; i < n; i++) num.depth[i] *= depthConv.factor;
   if (num.depth) checkNegativeDepth(num.depth, rows);

@@ -7,14 +7,14 @@ export function normaliseLongitude(lon: number): number {
   return ((((lon + 180) % 360) + 360) % 360) - 180;
 }
 
-/** Exclude rows with |lat| > 90 or |lon| > 360 ('position-out-of-range'), flag missing positions ('position-missing'), normalise longitudes in place. */
-export function checkPositionRange(lat: Float64Array, lon: Float64Array, rows: RowLedger): void {
+/** Exclude rows with |lat| > 90 or |lon| > 360 ('position-out-of-range'), flag missing positions ('position-missing') when asked, normalise longitudes in place. */
+export function checkPositionRange(lat: Float64Array, lon: Float64Array, rows: RowLedger, flagMissing = true): void {
   for (let i = 0; i < lat.length; i++) {
     if (Math.abs(lat[i]) > 90 || Math.abs(lon[i]) > 360) {
       rows.exclude(i, 'position-out-of-range', positionOutOfRange(lat[i], lon[i]));
       continue;
     }
-    if (!Number.isFinite(lat[i]) || !Number.isFinite(lon[i])) rows.add(i, 'flagged', 'position-missing', positionMissing(lat[i], lon[i]));
+    if (flagMissing && (!Number.isFinite(lat[i]) || !Number.isFinite(lon[i]))) rows.add(i, 'flagged', 'position-missing', positionMissing(lat[i], lon[i]));
     if (Number.isFinite(lon[i])) lon[i] = normaliseLongitude(lon[i]);
   }
 }

@@ -7,6 +7,8 @@ export interface ProjectInputs {
   configFile: string;
   /** Validated config. */
   config: Config;
+  /** The config file's text as read (hashed into the version manifest). */
+  configText: string;
   /** File bytes keyed by the path as written in the config. */
   files: Map<string, InputBytes>;
 }

@@ -4,3 +4,5 @@ export { inventoryByCruise, groupLedger, countBy, type CruiseInventory, type Led
 export { toCsv, csvField, neutraliseCell } from './csv.js';
 export type { ExtraFile } from './extra-file.js';
 export type { FigureEntry, FigurePage } from './figure-entry.js';
+export { buildResults, type BuildResults } from './build-results.js';
+export { buildSnapshot } from './build-snapshot.js';
