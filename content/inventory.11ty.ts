@@ -11,6 +11,14 @@ const ACTION_TITLES: Record<string, string> = {
   flagged: 'Rows flagged (kept)',
 };
 
+const METHOD_WORDS: Record<string, string> = {
+  factor: 'unit factor',
+  'eos80-density': 'per litre → per kg with EOS-80 density from T, S, p',
+  'default-density': 'per litre → per kg with the default density (T or S missing)',
+  'molar-mass': 'mass of carbon → amount (12.011 g mol⁻¹)',
+  'depth-from-pressure': 'depth from pressure (UNESCO 1983)',
+};
+
 /** Render the Inventory. */
 export function render({ report }: { report: ReportModel }): string {
   const actions = ['excluded', 'converted', 'flagged'].filter((a) => report.ledger.some((g) => g.action === a));
@@ -33,6 +41,35 @@ ${report.inventory.map((c) => html`<tr><td>${c.cruise}</td><td class="num">${c.s
 ${report.files.map((f) => html`<tr><td>${f.table}</td><td><code>${f.file}</code></td><td class="num">${f.rowsRead}</td><td class="num">${f.rowsUsed}</td><td class="num">${f.rowsExcluded}</td></tr>`)}
 </tbody>
 </table>
+</section>
+<section aria-labelledby="conversions">
+<h2 id="conversions">Unit conversions</h2>
+${report.conversions.length === 0 ? html`<p>Every value was already in its canonical unit.</p>` : html`<table>
+<thead><tr><th scope="col">File</th><th scope="col">Column</th><th scope="col">From</th><th scope="col">To</th><th scope="col">How</th><th scope="col" class="num">Rows</th></tr></thead>
+<tbody>
+${report.conversions.map((c) => html`<tr><td><code>${c.file}</code></td><td>${c.column}</td><td>${c.from}</td><td>${c.to}</td><td>${METHOD_WORDS[c.method] ?? c.method}</td><td class="num">${c.rows}</td></tr>`)}
+</tbody>
+</table>`}
+</section>
+<section aria-labelledby="matching">
+<h2 id="matching">Ambient iron for each cell</h2>
+<p>Where each cell's ambient dissolved Fe came from (nearest bottle of its station within the depth tolerance, interpolation between two bracketing bottles, the gridded field, or none).</p>
+<table>
+<thead><tr><th scope="col">Source</th><th scope="col" class="num">Cells</th></tr></thead>
+<tbody>
+${report.matchSources.map((m) => html`<tr><td>${m.value}</td><td class="num" data-match-source="${m.value}">${m.count}</td></tr>`)}
+</tbody>
+</table>
+</section>
+<section aria-labelledby="crossover">
+<h2 id="crossover">Cross-cruise consistency</h2>
+<p>Dissolved Fe below ${report.crossoverSettings.minDepthM} m at station pairs of different cruises within ${report.crossoverSettings.maxDistanceKm} km, compared at common depths. Offsets are reported, never applied; a pair is flagged when its offset exceeds ${report.crossoverSettings.thresholdNmolKg} nmol kg⁻¹ and twice its standard error.</p>
+${report.crossover.length === 0 ? html`<p>No station pairs of different cruises lie close enough to compare.</p>` : html`<table>
+<thead><tr><th scope="col">Cruise A</th><th scope="col">Cruise B</th><th scope="col" class="num">Offset A − B (nmol kg⁻¹)</th><th scope="col" class="num">SE</th><th scope="col" class="num">Depths</th><th scope="col" class="num">Station pairs</th><th scope="col">Flagged</th></tr></thead>
+<tbody>
+${report.crossover.map((c) => html`<tr><td>${c.cruiseA}</td><td>${c.cruiseB}</td><td class="num">${c.offset.toFixed(3)}</td><td class="num">${Number.isFinite(c.se) ? c.se.toFixed(3) : '—'}</td><td class="num">${c.nDepths}</td><td class="num">${c.nPairs}</td><td>${c.flagged ? 'yes' : 'no'}</td></tr>`)}
+</tbody>
+</table>`}
 </section>
 <section aria-labelledby="ledger">
 <h2 id="ledger">Ledger</h2>

@@ -54,6 +54,10 @@ export function buildReportModel(config: Config, result: PipelineResult, facts: 
     inventory,
     files,
     ledger: groupLedger(ledger.entries),
+    conversions: result.harmonise.flatMap((h) => h.conversions.map((c) => ({ file: h.file, column: c.column, from: c.from, to: c.to, method: c.method, rows: c.rows }))),
+    matchSources: countBy(cells, 'ambient_dissolved_fe_source'),
+    crossover: result.crossover.offsets.map((o) => ({ cruiseA: o.cruise_a, cruiseB: o.cruise_b, offset: o.offset_nmol_kg, se: o.se_nmol_kg, nDepths: o.n_depths, nPairs: o.n_station_pairs, flagged: o.flagged })),
+    crossoverSettings: { maxDistanceKm: config.crossover.max_distance_km, minDepthM: config.crossover.min_depth_m, thresholdNmolKg: config.crossover.threshold_nmol_kg },
     pages: [...BASE_PAGES],
     sections: {},
   };

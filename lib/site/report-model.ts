@@ -49,6 +49,40 @@ export interface FileAccount {
   rowsExcluded: number;
 }
 
+/** One unit conversion performed by the harmonise stage, for the Inventory and Methods pages. */
+export interface ConversionRow {
+  /** Input file. */
+  file: string;
+  /** Canonical column. */
+  column: string;
+  /** Unit as written. */
+  from: string;
+  /** Canonical unit. */
+  to: string;
+  /** How (factor, eos80-density, default-density, molar-mass, depth-from-pressure). */
+  method: string;
+  /** Rows converted this way. */
+  rows: number;
+}
+
+/** One cruise pair of the cross-cruise dFe comparison. */
+export interface CrossoverRow {
+  /** First cruise (sorted). */
+  cruiseA: string;
+  /** Second cruise. */
+  cruiseB: string;
+  /** Mean dFe difference a − b below the comparison depth, nmol/kg. */
+  offset: number;
+  /** Its standard error, nmol/kg. */
+  se: number;
+  /** Common depths compared. */
+  nDepths: number;
+  /** Station pairs compared. */
+  nPairs: number;
+  /** Beyond the threshold and 2 SE. */
+  flagged: boolean;
+}
+
 /** Everything the page templates need. Sections that a stage did not produce are absent. */
 export interface ReportModel {
   /** Metadata. */
@@ -61,6 +95,14 @@ export interface ReportModel {
   files: FileAccount[];
   /** Ledger grouped by reason. */
   ledger: LedgerGroup[];
+  /** Unit conversions performed. */
+  conversions: ConversionRow[];
+  /** Cells by the source of their ambient dFe (bottle, bottle-interpolated, grid, none). */
+  matchSources: { value: string; count: number }[];
+  /** Cross-cruise dFe offsets. */
+  crossover: CrossoverRow[];
+  /** Crossover comparison settings shown with the table. */
+  crossoverSettings: { maxDistanceKm: number; minDepthM: number; thresholdNmolKg: number };
   /** Pages this build has (hrefs), for the navigation. */
   pages: string[];
   /** Further sections added by later stages, keyed by page. */
