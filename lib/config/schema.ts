@@ -125,9 +125,10 @@ export const configSchema = z
         max_days_apart: positive.optional().describe('Largest time between the two stations (days); default no limit.'),
         min_depth_m: z.number().min(0).default(1000).describe('Compare dFe profiles below this depth; default 1000 m.'),
         threshold_nmol_kg: positive.default(0.1).describe('Flag a cruise pair whose mean offset exceeds this; default 0.1 nmol/kg.'),
+        max_gap_m: positive.default(1500).describe('Largest gap between two bottles of a profile that is interpolated across (m); default 1500, since deep bottles are often 500–1500 m apart.'),
       })
       .strict()
-      .default({ max_distance_km: 200, min_depth_m: 1000, threshold_nmol_kg: 0.1 }),
+      .default({ max_distance_km: 200, min_depth_m: 1000, threshold_nmol_kg: 0.1, max_gap_m: 1500 }),
     fits: z
       .object({
         models: z.array(z.enum(['ols', 'sma', 'york', 'saturating'])).min(1).default(['ols', 'sma', 'york', 'saturating']).describe('Models fitted per class; default all four.'),

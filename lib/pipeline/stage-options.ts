@@ -49,7 +49,7 @@ export function quotaOptions(config: Config): QuotaOptions {
 /** Options of crossoverOffsets from the `crossover` block. */
 export function crossoverOptions(config: Config): CrossoverOptions {
   const c = config.crossover;
-  return { maxDistanceKm: c.max_distance_km, maxDaysApart: c.max_days_apart, minDepthM: c.min_depth_m, thresholdNmolKg: c.threshold_nmol_kg };
+  return { maxDistanceKm: c.max_distance_km, maxDaysApart: c.max_days_apart, minDepthM: c.min_depth_m, thresholdNmolKg: c.threshold_nmol_kg, maxGapM: c.max_gap_m };
 }
 
 /** Options of fitQuotas from the `fits` block. */

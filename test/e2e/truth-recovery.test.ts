@@ -79,3 +79,17 @@ describe('runPipeline(demo) against the generator truth', () => {
     }
   });
 });
+
+describe('runPipeline(demo) cross-cruise comparison', () => {
+  it('recovers the dFe offset injected into one cruise below 1000 m within two standard errors', () => {
+    const crossover = JSON.parse(readFileSync(join(DEMO, 'truth.json'), 'utf8')).crossover as { cruise: string; reference_cruise: string; offset_nmol_kg: number };
+    const pair = result.crossover.offsets.find((o) => [o.cruise_a, o.cruise_b].sort().join() === [crossover.cruise, crossover.reference_cruise].sort().join());
+    expect(pair).toBeDefined();
+    // offset_nmol_kg is cruise_a − cruise_b; the truth adds the offset to `cruise`.
+    const expected = pair!.cruise_a === crossover.cruise ? crossover.offset_nmol_kg : -crossover.offset_nmol_kg;
+    // Two SE, not one: a ±1 SE interval misses the truth about a third of the time even when unbiased (common practice).
+    expect(Math.abs(pair!.offset_nmol_kg - expected)).toBeLessThanOrEqual(2 * pair!.se_nmol_kg);
+    expect(pair!.n_station_pairs).toBe(3);
+    expect(pair!.flagged).toBe(true);
+  });
+});
