@@ -10,6 +10,12 @@ export function render({ report }: { report: ReportModel }): string {
   const c = report.counts;
   const body = html`
 <p class="lede">${report.meta.programme ? html`${report.meta.programme}. ` : ''}Synthesis of ${c.cruises} cruises: ${c.stations} stations, ${c.samples} bottle samples and ${c.cells} analysed cells. Built ${report.meta.date}.</p>
+${report.findings.length ? html`<section aria-labelledby="findings">
+<h2 id="findings">Key findings</h2>
+<ul class="findings">
+${report.findings.map((f) => html`<li>${f.text} (<a href="${f.href}">${f.linkText}</a>)</li>`)}
+</ul>
+</section>` : ''}
 <section aria-labelledby="counts">
 <h2 id="counts">Holdings</h2>
 <dl class="counts">

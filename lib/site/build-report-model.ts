@@ -3,6 +3,7 @@ import type { Config } from '../config/index.js';
 import type { PipelineResult } from '../pipeline/index.js';
 import { countBy, groupLedger, inventoryByCruise } from './inventory.js';
 import type { FileAccount, ReportModel } from './report-model.js';
+import { keyFindings } from './key-findings.js';
 
 /** Facts of the build that come from the shell: version number, date, tool version. */
 export interface BuildFacts {
@@ -51,6 +52,7 @@ export function buildReportModel(config: Config, result: PipelineResult, facts: 
       cells: cells.numRows(),
       cellsByClass: countBy(cells, classColumn),
     },
+    findings: keyFindings(result, new Map((result.regions?.features ?? []).map((f) => [String(f.properties.id), String(f.properties.name)]))),
     inventory,
     files,
     ledger: groupLedger(ledger.entries),

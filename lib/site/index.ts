@@ -6,3 +6,5 @@ export type { ExtraFile } from './extra-file.js';
 export type { FigureEntry, FigurePage } from './figure-entry.js';
 export { buildResults, type BuildResults } from './build-results.js';
 export { buildSnapshot } from './build-snapshot.js';
+export { keyFindings, FINDING_LINKS, type KeyFinding } from './key-findings.js';
+export { sig, pValue, pRelation, interval } from './format.js';

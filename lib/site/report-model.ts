@@ -1,5 +1,6 @@
 // The plain-data model every page template reads; built from pipeline results, never from disk.
 import type { CruiseInventory, LedgerGroup } from './inventory.js';
+import type { KeyFinding } from './key-findings.js';
 
 /** Report metadata shown on every page. */
 export interface ReportMeta {
@@ -89,6 +90,8 @@ export interface ReportModel {
   meta: ReportMeta;
   /** Headline counts. */
   counts: ReportCounts;
+  /** Key findings written from the results, each linked to its figure. */
+  findings: KeyFinding[];
   /** Per-cruise holdings. */
   inventory: CruiseInventory[];
   /** Per-file accounting (rows read = used + excluded). */

@@ -3,7 +3,7 @@ import { buildMap, feStarGrid, figureCsv } from '../../figures/index.js';
 import { sig } from './format.js';
 import { gridOf } from './field-maps.js';
 import { fieldRange, latticeLevel, latticeRows } from './lattice-level.js';
-import { mapOptions } from './map-defaults.js';
+import { compactMap, mapOptions } from './map-defaults.js';
 import { DEFAULT_FE_STAR_RATIO } from './messages.js';
 import type { FigureContext, SiteFigure } from './site-figure.js';
 import { stationPoints } from './station-points.js';
@@ -24,7 +24,7 @@ export function feStarMap(ctx: FigureContext): SiteFigure | null {
   const { field, depth } = latticeLevel(star, ctx.config.figures.depths_m[0] ?? 0);
   const stations = stationPoints(ctx.result.samples);
   const map = buildMap(
-    { raster: { field, title: `Fe* at ${depth} m (nmol kg⁻¹)`, centreZero: true }, stations },
+    { raster: { field, title: `Fe* at ${depth} m (nmol kg⁻¹)`, centreZero: true }, stations, graticule: false },
     mapOptions(ctx, 'fe-star-map', { projection: ctx.config.figures.projection, title: `Fe* at ${depth} m, annual mean` }),
   );
   const range = fieldRange(field);
@@ -37,7 +37,7 @@ export function feStarMap(ctx: FigureContext): SiteFigure | null {
       `Fe* = dFe − R·PO₄ at the ${depth} m level with R = ${sig(ratio.value)} mmol mol⁻¹ from ${source}` +
       `${range ? `; values range from ${sig(range[0])} to ${sig(range[1])} nmol kg⁻¹` : ''}. Negative Fe* marks water with less iron than its phosphate would supply at that ratio.`,
     alt: `Map of Fe* at ${depth} m on a diverging colour scale centred on zero, with ${stations.length} stations as dots.`,
-    svg: map.svg,
+    svg: compactMap(map.svg),
     csv: figureCsv(latticeRows(field), ['lon', 'lat', { key: 'value', header: 'fe_star_nmol_kg' }]),
     caution: null,
   };

@@ -3,7 +3,7 @@ import { buildMap, figureCsv, thresholdOutline, type OutlineLayer } from '../../
 import type { Grid } from '../../types.js';
 import { sig } from './format.js';
 import { fieldRange, latticeLevel, latticeRows } from './lattice-level.js';
-import { mapOptions } from './map-defaults.js';
+import { compactMap, mapOptions } from './map-defaults.js';
 import type { FigureContext, SiteFigure } from './site-figure.js';
 import { stationPoints } from './station-points.js';
 
@@ -41,7 +41,7 @@ export function fieldMaps(ctx: FigureContext): SiteFigure[] {
       const outlines = v.key === 'nitrate' && hnlc ? [hnlc] : [];
       const title = `${v.name} at ${depth} m, annual mean`;
       const map = buildMap(
-        { raster: { field, title: `${v.name} at ${depth} m (${v.unit})`, log: v.log }, stations, outlines },
+        { raster: { field, title: `${v.name} at ${depth} m (${v.unit})`, log: v.log }, stations, outlines, graticule: false },
         mapOptions(ctx, id, { projection: ctx.config.figures.projection, title }),
       );
       const range = fieldRange(field);
@@ -54,7 +54,7 @@ export function fieldMaps(ctx: FigureContext): SiteFigure[] {
           `${v.name} from ${source.grid.source} (variable ${source.grid.variable}) at the ${depth} m level, averaged over ${Math.max(1, source.grid.time.length)} time steps` +
           `${range ? `, ranging from ${sig(range[0])} to ${sig(range[1])} ${v.unit}` : ''}; ${stations.length} bottle stations overlaid.${hnlcText}`,
         alt: `Map of ${v.name.toLowerCase()} at ${depth} m${v.log ? ' on a logarithmic colour scale' : ''} with ${stations.length} stations as dots${outlines.length ? ' and a dashed HNLC outline' : ''}.`,
-        svg: map.svg,
+        svg: compactMap(map.svg),
         csv: figureCsv(latticeRows(field), ['lon', 'lat', { key: 'value', header: `${v.key}_${v.unit === 'nmol kg⁻¹' ? 'nmol_kg' : 'umol_kg'}` }]),
         caution: null,
       });

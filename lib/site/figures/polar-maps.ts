@@ -1,9 +1,10 @@
 // Fields page: one extra dFe map per figures.polar entry (south-polar or north-polar), stations overlaid.
 import { buildMap, figureCsv } from '../../figures/index.js';
+import { rowsCsv } from './rows-csv.js';
 import { sig } from './format.js';
 import { gridOf } from './field-maps.js';
 import { fieldRange, latticeLevel, latticeRows } from './lattice-level.js';
-import { mapOptions } from './map-defaults.js';
+import { compactMap, mapOptions } from './map-defaults.js';
 import type { FigureContext, SiteFigure } from './site-figure.js';
 import { stationPoints } from './station-points.js';
 
@@ -30,8 +31,8 @@ export function polarMaps(ctx: FigureContext): SiteFigure[] {
         `${south ? 'South' : 'North'}-polar view poleward of ${south ? '40° S' : '40° N'}` +
         `${level ? ` of annual-mean dFe at ${level.depth} m${range ? ` (${sig(range[0])}–${sig(range[1])} nmol kg⁻¹ over the whole grid)` : ''}` : ''}, with the ${visible.length} stations that fall inside it.`,
       alt: `${south ? 'South' : 'North'}-polar map${level ? ' of dissolved iron' : ''} with ${visible.length} stations as dots.`,
-      svg: map.svg,
-      csv: level ? rowsCsv(latticeRows(level.field).filter((r) => (south ? r.lat <= -40 : r.lat >= 40)), ['lon', 'lat', { key: 'value', header: 'dfe_nmol_kg' }]) : rowsCsv(visible, ['cruise', 'station', 'lat', 'lon']),
+      svg: compactMap(map.svg),
+      csv: level ? figureCsv(latticeRows(level.field).filter((r) => (south ? r.lat <= -40 : r.lat >= 40)), ['lon', 'lat', { key: 'value', header: 'dfe_nmol_kg' }]) : rowsCsv(visible, ['cruise', 'station', 'lat', 'lon']),
       caution: null,
     };
   });

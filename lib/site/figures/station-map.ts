@@ -1,6 +1,7 @@
 // Fields page: every bottle station on the configured projection, coloured by cruise.
-import { buildMap, figureCsv } from '../../figures/index.js';
-import { mapOptions } from './map-defaults.js';
+import { buildMap } from '../../figures/index.js';
+import { rowsCsv } from './rows-csv.js';
+import { compactMap, mapOptions } from './map-defaults.js';
 import type { FigureContext, SiteFigure } from './site-figure.js';
 import { stationPoints } from './station-points.js';
 
@@ -9,7 +10,7 @@ export function stationMap(ctx: FigureContext): SiteFigure {
   const stations = stationPoints(ctx.result.samples);
   const cruises = [...new Set(stations.map((s) => s.cruise))].sort();
   const projection = ctx.config.figures.projection;
-  const map = buildMap({ stations }, mapOptions(ctx, 'station-map', { projection, title: 'Stations by cruise' }));
+  const map = buildMap({ stations, graticule: false }, mapOptions(ctx, 'station-map', { projection, title: 'Stations by cruise' }));
   const perCruise = cruises.map((c) => `${c} (${stations.filter((s) => s.cruise === c).length})`).join(', ');
   return {
     id: 'station-map',
@@ -17,7 +18,7 @@ export function stationMap(ctx: FigureContext): SiteFigure {
     title: 'Stations by cruise',
     caption: `Bottle stations of ${cruises.length} cruises, ${stations.length} stations in all, on the ${projection} projection: ${perCruise}.`,
     alt: `Map of ${stations.length} sampling stations coloured by cruise (${cruises.join(', ')}).`,
-    svg: map.svg,
+    svg: compactMap(map.svg),
     csv: rowsCsv(stations, ['cruise', 'station', 'lat', 'lon', 'samples']),
     caution: null,
   };

@@ -102,9 +102,9 @@ export function anomalyStage(result: PipelineResult): MethodStage | null {
     formulas: [
       formula('t-test', 'One-sample t on m station means', FORMULA_TEX['t-test']),
       formula('bh', 'Benjamini–Hochberg: reject the k smallest p values', FORMULA_TEX.bh),
-      formula('min-detectable', 'Smallest detectable mean shift (sampling gap)', FORMULA_TEX['min-detectable']),
+      formula('min-detectable', 'Smallest detectable mean shift δ_min: power of the two-sided one-sample t test (non-central t)', FORMULA_TEX['min-detectable']),
     ],
-    references: ['wilcoxon1945', 'benjamini1995'],
+    references: ['wilcoxon1945', 'benjamini1995', 'cohen1988'],
   };
 }
 

@@ -17,7 +17,7 @@ export const FORMULA_TEX = {
   't-test': String.raw`t = \frac{\bar{r}}{s / \sqrt{m}},\quad \nu = m - 1`,
   bh: String.raw`k = \max\left\{ i : p_{(i)} \le \frac{i}{m}\,q \right\}`,
   'fe-star': String.raw`\mathrm{Fe^{*}} = \mathrm{dFe} - R_{\mathrm{Fe:P}}\,[\mathrm{PO_4}]`,
-  'min-detectable': String.raw`\delta_{\min} = (t_{1-\alpha/2,\,m-1} + t_{1-\beta,\,m-1})\,\frac{s}{\sqrt{m}}`,
+  'min-detectable': String.raw`\Pr\left(|T_{m-1,\,\lambda}| > t_{1-\alpha/2,\,m-1}\right) = 1-\beta,\quad \lambda = \frac{\delta_{\min}\sqrt{m}}{s}`,
 } as const;
 
 /** Id of a formula in FORMULA_TEX. */

@@ -20,7 +20,8 @@ export type ReferenceId =
   | 'ioc2013'
   | 'joyce1994'
   | 'burnham2002'
-  | 'wilcoxon1945';
+  | 'wilcoxon1945'
+  | 'cohen1988';
 
 /**
  * Every reference the method notes may cite, keyed by id. DOIs are given only where checked; a work without
@@ -90,6 +91,10 @@ export const REFERENCES: Readonly<Record<ReferenceId, Reference>> = {
   wilcoxon1945: {
     ...base, id: 'wilcoxon1945', type: 'article-journal', authors: [n('Wilcoxon', 'F.')], year: 1945, title: 'Individual comparisons by ranking methods',
     container: 'Biometrics Bulletin', volume: '1', pages: '80–83', doi: '10.2307/3001968',
+  },
+  cohen1988: {
+    ...base, id: 'cohen1988', type: 'book', authors: [n('Cohen', 'J.')], year: 1988, title: 'Statistical Power Analysis for the Behavioral Sciences, 2nd edn',
+    publisher: 'Lawrence Erlbaum Associates, Hillsdale, NJ', doiNote: 'DOI not given',
   },
 };
 
