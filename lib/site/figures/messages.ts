@@ -1,4 +1,4 @@
-// Fixed texts of the report's figures: the C:Fe caution and the Fe* default note.
+// Fixed texts of the report's figures: the C:Fe caution and the default Fe* ratio.
 
 /** Caution shown beside every implied C:Fe efficiency estimate (DESIGN "Cautions"). */
 export const CARBON_PER_IRON_CAUTION =
@@ -8,7 +8,3 @@ export const CARBON_PER_IRON_CAUTION =
 /** Default R Fe:P (mmol mol⁻¹) for Fe* when the config gives none: Parekh, Follows & Boyle (2005), Global Biogeochem. Cycles 19, GB2020. */
 export const DEFAULT_FE_STAR_RATIO = { value: 0.47, citation: 'Parekh, Follows & Boyle (2005) Global Biogeochem. Cycles 19:GB2020' };
 
-/** Caption note when a figure has nothing to show. */
-export function nothingToShow(what: string): string {
-  return `No ${what} were available in this build, so the figure is empty.`;
-}
