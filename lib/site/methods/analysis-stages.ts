@@ -3,7 +3,7 @@ import type { Config } from '../../config/index.js';
 import { builtinBasinBoundaries, builtinBasinRules } from '../../geo/regions/index.js';
 import type { PipelineResult } from '../../pipeline/index.js';
 import { DEFAULT_FE_STAR_RATIO } from '../figures/messages.js';
-import { num } from './count-values.js';
+import { sig3 } from './count-values.js';
 import { FORMULA_TEX } from './formulas.js';
 import { STATION_AGGREGATION_TEXT } from './messages.js';
 import type { MethodFormula, MethodStage } from './methods-model.js';
@@ -96,7 +96,7 @@ export function anomalyStage(result: PipelineResult): MethodStage | null {
       { name: 'Sampling gap: target fold', value: String(s.targetFold) },
       { name: 'Sampling gap: power', value: String(s.power) },
       { name: 'Sampling gap: significance', value: `${s.alphaForPower} (q used as a stand-in for the BH per-test threshold)` },
-      { name: 'Pooled between-station SD', value: `${num(result.anomalies.pooled.sd)} log10 units (${result.anomalies.pooled.df} df)` },
+      { name: 'Pooled between-station SD', value: `${sig3(result.anomalies.pooled.sd)} log10 units (${result.anomalies.pooled.df} df)` },
     ],
     tables: [],
     formulas: [

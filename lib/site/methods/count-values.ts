@@ -17,3 +17,8 @@ export function countValues(table: aq.ColumnTable, column: string): Map<string, 
 export function num(value: number | null | undefined): string {
   return value === null || value === undefined || !Number.isFinite(value) ? '—' : String(value);
 }
+
+/** A number to 3 significant digits (fixed, locale-free), or "—" when it is not finite. */
+export function sig3(value: number | null | undefined): string {
+  return value === null || value === undefined || !Number.isFinite(value) ? '—' : String(Number(value.toPrecision(3)));
+}

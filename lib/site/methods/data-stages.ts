@@ -92,3 +92,26 @@ export function matchStage(result: PipelineResult, config: Config): MethodStage 
     references: [],
   };
 }
+
+/** The cross-cruise dFe comparison: settings and how many cruise pairs were compared and flagged. */
+export function crossoverStage(result: PipelineResult, config: Config): MethodStage {
+  const c = config.crossover;
+  const offsets = result.crossover.offsets;
+  return {
+    id: 'crossover',
+    title: 'Cross-cruise dFe comparison',
+    text: [
+      'Deep dFe profiles of stations of different cruises close in space were compared at common depths; a cruise pair is flagged when its mean offset exceeds the threshold and twice its standard error.',
+      `${result.crossover.pairs.length} station pairs and ${offsets.length} cruise pairs were compared; ${offsets.filter((o) => o.flagged).length} cruise pairs were flagged.`,
+    ],
+    parameters: [
+      { name: 'Largest station distance', value: `${c.max_distance_km} km` },
+      { name: 'Largest time apart', value: c.max_days_apart !== undefined ? `${c.max_days_apart} days` : 'no limit' },
+      { name: 'Compared below', value: `${c.min_depth_m} m` },
+      { name: 'Flag threshold', value: `${c.threshold_nmol_kg} nmol kg⁻¹` },
+    ],
+    tables: [],
+    formulas: [],
+    references: [],
+  };
+}

@@ -3,7 +3,7 @@ import type { Config } from '../../config/index.js';
 import type { PipelineResult } from '../../pipeline/index.js';
 import { DEFAULT_PICOCYANOBACTERIA_FACTOR } from '../../quotas/index.js';
 import { anomalyStage, feStarStage, fitStage, regionStage } from './analysis-stages.js';
-import { harmoniseStage, loadStage, matchStage } from './data-stages.js';
+import { crossoverStage, harmoniseStage, loadStage, matchStage } from './data-stages.js';
 import type { MethodStage, MethodsSection } from './methods-model.js';
 import { quotaStage } from './quota-stage.js';
 import type { Reference } from './reference.js';
@@ -22,14 +22,17 @@ function resolve(id: string, config: Config): Reference {
 }
 
 /**
- * Method notes of a run: the stages that ran (load, harmonise, match, quotas, fits, regions, anomalies, Fe*)
+ * Method notes of a run: the stages that ran (load, harmonise, match, crossover, quotas, fits, regions, anomalies, Fe*)
  * with their parameters, counts and formulas (MathML), and the references of the methods used, each once.
  */
 export function methodsSection(result: PipelineResult, config: Config): MethodsSection {
   const ran = result.harmonise.length > 0;
   const stages: MethodStage[] = [loadStage(result, config)];
   if (ran) stages.push(harmoniseStage(result, config));
-  if (ran && result.cells.columnNames().includes('ambient_dissolved_fe_source')) stages.push(matchStage(result, config));
+  if (ran && result.cells.columnNames().includes('ambient_dissolved_fe_source')) {
+    stages.push(matchStage(result, config));
+    stages.push(crossoverStage(result, config));
+  }
   if (result.cells.columnNames().includes('carbon_method')) stages.push(quotaStage(result, config));
   for (const s of [fitStage(result), regionStage(result, config), anomalyStage(result), ran ? feStarStage(result, config) : null]) if (s) stages.push(s);
   const references: Reference[] = [];

@@ -16,7 +16,7 @@ const ids = (s: MethodsSection): string[] => s.references.map((r) => r.id);
 
 describe('methodsSection(result, config)', () => {
   it('lists the stages that ran in pipeline order', () => {
-    expect(section.stages.map((s) => s.id)).toEqual(['load', 'harmonise', 'match', 'quotas', 'fits', 'regions', 'anomalies', 'fe-star']);
+    expect(section.stages.map((s) => s.id)).toEqual(['load', 'harmonise', 'match', 'crossover', 'quotas', 'fits', 'regions', 'anomalies', 'fe-star']);
   });
 
   it('cites the methods the demo uses: its config names IOC and WOCE flags, pressure in dbar, MDL and Redfield carbon, all four fits', () => {
@@ -85,6 +85,15 @@ describe('methodsSection(result, config)', () => {
     expect(ids(s)).not.toContain('redfield1963');
     expect(ids(s)).toContain('menden-deuer2000');
   }, 180_000);
+});
+
+describe('methodsSection(result, config) purity', () => {
+  it('leaves the config and the fit options untouched and gives the same section twice', () => {
+    const before = JSON.stringify([demo.config, demo.result.fits?.options, demo.result.harmonise]);
+    const again = methodsSection(demo.result, demo.config);
+    expect(JSON.stringify([demo.config, demo.result.fits?.options, demo.result.harmonise])).toBe(before);
+    expect(JSON.stringify(again)).toBe(JSON.stringify(section));
+  });
 });
 
 describe('REFERENCES', () => {
