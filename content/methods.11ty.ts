@@ -4,6 +4,7 @@ import { layout } from './_lib/layout.js';
 import type { ReportModel } from '../lib/site/report-model.js';
 import { doiUrl, formatReference, type MethodStage, type MethodsSection } from '../lib/site/methods/index.js';
 
+/** Eleventy data: the page's output path. */
 export const data = { permalink: 'methods.html' };
 
 function stage(s: MethodStage, numbers: Map<string, number>) {

@@ -4,6 +4,7 @@ import { layout } from './_lib/layout.js';
 import type { ReportModel } from '../lib/site/report-model.js';
 import type { SupplementFile, SupplementSection } from '../lib/site/supplement/index.js';
 
+/** Eleventy data: the page's output path. */
 export const data = { permalink: 'supplement.html' };
 
 /** File size in words: bytes, kB or MB (1 kB = 1000 bytes). */

@@ -33,5 +33,5 @@ export interface SupplementSection {
   zip: SupplementFile;
 }
 
-/** Figure metadata the pack can attach to figure files (id, title, caption), e.g. from the FigureEntry list. */
-export type SupplementFigureInfo = Pick<FigureEntry, 'id' | 'title' | 'caption'>;
+/** Figure metadata the pack attaches to figure files (id, title, caption; file labels by href when given), e.g. a FigureEntry. */
+export type SupplementFigureInfo = Pick<FigureEntry, 'id' | 'title' | 'caption'> & Partial<Pick<FigureEntry, 'files'>>;

@@ -60,7 +60,8 @@ function groupFigures(files: readonly ExtraFile[], info: readonly SupplementFigu
     const id = known?.id ?? name.split('.')[0];
     let g = groups.get(id);
     if (!g) groups.set(id, (g = { id, title: known?.title ?? id, caption: known?.caption ?? '', files: [] }));
-    g.files.push({ path: f.path, label: figureLabel(name), bytes: fileBytes(f.data).length });
+    const label = known?.files?.find((x) => x.href === f.path)?.label ?? figureLabel(name);
+    g.files.push({ path: f.path, label, bytes: fileBytes(f.data).length });
   }
   return [...groups.values()].sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
 }

@@ -11,10 +11,12 @@ export function fileBytes(data: string | Uint8Array): Uint8Array {
 
 /**
  * A zip holding `files` under `prefix`-stripped names, entries sorted by name, each stamped `stamp`
- * (ISO date-time read as the zip's local DOS time, so the bytes do not depend on the time zone; default 1980-01-01).
+ * (ISO date-time read as the zip's local DOS time, so the bytes do not depend on the time zone; years before 1980,
+ * the DOS epoch, become 1980; an unreadable stamp and the default are 1980-01-01).
  */
 export function zipFiles(files: readonly ExtraFile[], prefix = '', stamp = '1980-01-01T00:00:00Z'): Uint8Array {
-  const d = new Date(stamp);
+  const parsed = new Date(stamp);
+  const d = Number.isNaN(parsed.getTime()) ? new Date('1980-01-01T00:00:00Z') : parsed;
   const year = Math.max(1980, d.getUTCFullYear());
   // fflate writes DOS time from local-time getters; a Date built from local parts gives the same fields everywhere.
   const mtime = new Date(year, d.getUTCMonth(), d.getUTCDate(), d.getUTCHours(), d.getUTCMinutes(), d.getUTCSeconds());

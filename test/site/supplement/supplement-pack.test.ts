@@ -62,6 +62,12 @@ describe('supplementPack(input)', () => {
     expect(fec.files.map((f) => f.label)).toEqual(['PNG 85 mm 300 dpi', 'Data (CSV)', 'SVG', 'Vega-Lite spec (JSON)']);
   });
 
+  it('takes file labels from the figure entry when it lists the file', () => {
+    const info = [{ id: 'fec-vs-dfe', title: 'T', caption: 'C', files: [{ label: 'Vector (SVG)', href: 'supplement/figures/fec-vs-dfe.svg' }] }];
+    const fec = supplementPack({ ...input(), figureInfo: info }).section.figures[1];
+    expect(fec.files.map((f) => f.label)).toEqual(['PNG 85 mm 300 dpi', 'Data (CSV)', 'Vector (SVG)', 'Vega-Lite spec (JSON)']);
+  });
+
   it('writes merged-cells.csv, results.json and ledger.csv', () => {
     const paths = supplementPack(input()).files.map((f) => f.path);
     expect(paths).toEqual([SUPPLEMENT_PATHS.ledger, SUPPLEMENT_PATHS.cells, SUPPLEMENT_PATHS.results, SUPPLEMENT_PATHS.zip]);
@@ -90,5 +96,12 @@ describe('zipFiles(files, prefix, stamp)', () => {
     const view = new DataView(utc.buffer, utc.byteOffset);
     expect(view.getUint16(10, true)).toBe((5 << 11) | (6 << 5) | (7 >> 1));
     expect(view.getUint16(12, true)).toBe(((2026 - 1980) << 9) | (3 << 5) | 4);
+  });
+
+  it('stamps a date before 1980 or an unreadable one as 1980', () => {
+    const files = [{ path: 'a.txt', data: 'a' }];
+    const view = (z: Uint8Array) => new DataView(z.buffer, z.byteOffset).getUint16(12, true);
+    expect(view(zipFiles(files, '', '1970-01-01'))).toBe((0 << 9) | (1 << 5) | 1);
+    expect(view(zipFiles(files, '', 'not a date'))).toBe((0 << 9) | (1 << 5) | 1);
   });
 });
