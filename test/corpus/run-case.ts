@@ -1,0 +1,82 @@
+// Run one corpus case in-process: the `check` output and exit code, the pipeline result for the ledger invariant.
+import { checkProject } from '../../lib/cli/check-project.js';
+import { formatProblem } from '../../lib/cli/format-problem.js';
+import { checkSummary } from '../../lib/cli/messages.js';
+import { readProject } from '../../lib/cli/read-project.js';
+import { hasErrors, runPipeline, type PipelineResult } from '../../lib/pipeline/index.js';
+import type { LedgerEntry, Problem } from '../../lib/types.js';
+import type { CorpusCase } from './cases.js';
+import { makeProject } from './make-project.js';
+
+/** What a case produced. */
+export interface CaseRun {
+  /** Exit code of `check`. */
+  exit: number;
+  /** Lines `check` printed. */
+  lines: string[];
+  /** Pipeline result when the project could be read. */
+  result?: PipelineResult;
+}
+
+/** Write the case's project. */
+export function writeCase(c: CorpusCase): string {
+  const dir = makeProject(c.patch);
+  c.setup?.(dir);
+  return dir;
+}
+
+/** Run `check` on the case's project through checkProject itself (slower: the pipeline result is not kept). */
+export function checkCase(c: CorpusCase): { exit: number; lines: string[] } {
+  const lines: string[] = [];
+  const exit = checkProject(writeCase(c), undefined, (l) => lines.push(l));
+  return { exit, lines };
+}
+
+/**
+ * Run the case once and print what `check` prints, keeping the pipeline result: the same steps as checkProject
+ * (lib/cli/check-project.ts), so one pipeline run gives both; `checkCase` confirms they agree.
+ */
+export function runCase(c: CorpusCase): CaseRun {
+  const project = readProject(writeCase(c));
+  const problems: Problem[] = [...project.problems];
+  const result = project.inputs ? runPipeline(project.inputs) : undefined;
+  if (result) {
+    problems.push(...result.problems);
+    for (const e of result.ledger.entries) {
+      if (e.action === 'excluded') problems.push({ file: e.file, line: e.line, col: 0, message: `${e.reason}: ${e.detail} (row excluded)`, severity: 'warning' });
+    }
+  }
+  problems.sort((a, b) => a.file.localeCompare(b.file) || a.line - b.line);
+  const lines = problems.map(formatProblem);
+  const errors = problems.filter((p) => p.severity === 'error').length;
+  lines.push(checkSummary(errors, problems.length - errors));
+  return { exit: hasErrors(problems) ? 1 : 0, lines, result };
+}
+
+/** One ledger row as `file:line action reason: detail`. */
+export function formatEntry(e: LedgerEntry): string {
+  return `${e.file}:${e.line} ${e.action} ${e.reason}: ${e.detail}`;
+}
+
+/** Load and harmonise ledger rows that `check` does not print (converted or flagged values). */
+export function valueNotes(result: PipelineResult | undefined): string[] {
+  if (!result) return [];
+  return result.ledger.entries.filter((e) => (e.stage === 'load' || e.stage === 'harmonise') && e.action !== 'excluded').map(formatEntry);
+}
+
+/** Per file: rows read, rows in the final tables, rows ledgered as excluded (distinct lines). */
+export function ledgerBalance(result: PipelineResult): { file: string; read: number; used: number; excluded: number }[] {
+  const byFile = new Map<string, { read: number; table: string }>();
+  for (const c of result.counts) {
+    const prev = byFile.get(c.file);
+    byFile.set(c.file, { read: (prev?.read ?? 0) + c.rowsRead, table: c.table });
+  }
+  return [...byFile.entries()].map(([file, { read, table }]) => {
+    const t = table === 'samples' ? result.samples : result.cells;
+    const files = t.numRows() > 0 ? (t.array('source_file') as ArrayLike<string>) : [];
+    let used = 0;
+    for (let i = 0; i < files.length; i++) if (files[i] === file) used++;
+    const excluded = new Set(result.ledger.entries.filter((e) => e.action === 'excluded' && e.file === file && e.table === table).map((e) => e.line)).size;
+    return { file, read, used, excluded };
+  });
+}
