@@ -1,6 +1,6 @@
 // `basinquota build`: read, run the pipeline, number the version, model the report, write the site atomically, archive.
 import { join } from 'node:path';
-import { hasErrors, runPipeline, type PipelineResult } from '../pipeline/index.js';
+import { decodeColumnarInputs, hasErrors, runPipeline, type PipelineResult } from '../pipeline/index.js';
 import { buildReportModel, buildResults, buildSnapshot, type ReportModel } from '../site/index.js';
 import { buildManifest, diffSnapshots, firstVersionChanges, nextVersion, prettyJson } from '../version/index.js';
 import { ArchiveError, archivedSiteFiles, readArchive, writeArchiveVersion } from './archive.js';
@@ -42,6 +42,9 @@ export async function buildProject(options: BuildOptions): Promise<BuildOutcome>
   for (const p of project.problems) log(formatProblem(p));
   if (!project.inputs) return { code: 1 };
   const inputs = project.inputs;
+  const columnarProblems = await decodeColumnarInputs(inputs);
+  for (const p of columnarProblems) log(formatProblem(p));
+  if (hasErrors(columnarProblems)) return { code: 1 };
   log(`basinquota build ${project.dir}`);
   const result = runPipeline(inputs, progressPrinter(log));
   for (const p of result.problems) log(formatProblem(p));

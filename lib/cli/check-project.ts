@@ -1,14 +1,15 @@
 // `basinquota check`: validate the config and run every stage in memory; print problems; write nothing.
-import { hasErrors, runPipeline, silentProgress } from '../pipeline/index.js';
+import { decodeColumnarInputs, hasErrors, runPipeline, silentProgress } from '../pipeline/index.js';
 import { formatProblem } from './format-problem.js';
 import * as msg from './messages.js';
 import { readProject } from './read-project.js';
 
 /** Check a project; returns the exit code (0 ok, 1 errors). */
-export function checkProject(dir: string, config: string | undefined, log: (line: string) => void): number {
+export async function checkProject(dir: string, config: string | undefined, log: (line: string) => void): Promise<number> {
   const project = readProject(dir, config);
   const problems = [...project.problems];
-  if (project.inputs) {
+  if (project.inputs) problems.push(...(await decodeColumnarInputs(project.inputs)));
+  if (project.inputs && !hasErrors(problems)) {
     const result = runPipeline(project.inputs, silentProgress);
     problems.push(...result.problems);
     for (const e of result.ledger.entries) {

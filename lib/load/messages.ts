@@ -50,9 +50,15 @@ export const csvSyntax = (detail: string): string => `CSV syntax error: ${detail
 export const cruiseMismatch = (configCruise: string, rowCruise: string): string =>
   `cruise "${rowCruise}" differs from the file's configured cruise "${configCruise}"`;
 
-/** A field longer than the loader accepts. */
-export const fieldTooLong = (header: string, length: number, limit: number): string =>
-  `column "${header}": field of ${length} characters exceeds the limit of ${limit}`;
+/** A record longer than the loader accepts (a runaway quote or an enormous field). */
+export const recordTooLong = (limit: number): string =>
+  `a record is longer than ${limit} characters (an unclosed quote, or a field far too long for a data value)`;
+
+/** A columnar file (Parquet, Arrow) the reader cannot decode. */
+export const columnarUnreadable = (format: string, detail: string): string => `not a readable ${format} file (${detail})`;
+
+/** A columnar column of a type basinquota cannot take. */
+export const columnarType = (column: string, type: string): string => `column "${column}" has type ${type}; expected numbers, text or timestamps`;
 
 function describeDelimiter(d: string): string {
   return d === '\t' ? 'tabs' : d === ',' ? 'commas' : d === ';' ? 'semicolons' : d === '|' ? 'pipes' : `"${d}"`;

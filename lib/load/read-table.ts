@@ -67,10 +67,39 @@ export function readTable(input: InputText, options: ReadTableOptions, ledger: L
     }) as unknown as typeof records;
   } catch (error) {
     const e = error as { lines?: number; message?: string; code?: string };
-    const detail = e.code === 'CSV_MAX_RECORD_SIZE' ? msg.fieldTooLong('?', (options.maxFieldLength ?? 100_000) + 1, options.maxFieldLength ?? 100_000) : msg.csvSyntax(String(e.message ?? error).split('\n')[0]);
+    const detail = e.code === 'CSV_MAX_RECORD_SIZE' ? msg.recordTooLong(options.maxFieldLength ?? 100_000) : msg.csvSyntax(String(e.message ?? error).split('\n')[0]);
     return fail(e.lines ?? 0, 0, detail);
   }
   const header = records[0].record.map((h) => h.trim());
+  const rows: RawRecord[] = [];
+  let prevLines = records[0].info.lines;
+  let prevEmpty = records[0].info.empty_lines;
+  for (let r = 1; r < records.length; r++) {
+    const { record, info } = records[r];
+    rows.push({ fields: record, line: prevLines + 1 + (info.empty_lines - prevEmpty) });
+    prevLines = info.lines;
+    prevEmpty = info.empty_lines;
+  }
+  return tableFromRecords(file, header, rows, { ...options, delimiter }, ledger);
+}
+
+/** One data record as text fields with its physical line (or row number for columnar files). */
+export interface RawRecord {
+  /** Field texts in header order. */
+  fields: string[];
+  /** Physical line in the file (header = 1), or 1-based row number + 1 for columnar files. */
+  line: number;
+}
+
+/** The typed-parsing core shared by delimited and columnar inputs: header check, column map, typed values, ledger. */
+export function tableFromRecords(file: string, rawHeader: string[], records: RawRecord[], options: ReadTableOptions, ledger: Ledger): ReadTableResult {
+  const problems: Problem[] = [];
+  const fail = (line: number, col: number, message: string): ReadTableResult => {
+    problems.push({ file, line, col, message, severity: 'error' });
+    return { table: aq.table({}), rowsRead: 0, problems };
+  };
+  const delimiter = options.delimiter ?? ',';
+  const header = rawHeader.map((h) => h.trim());
   const seen = new Map<string, number>();
   for (let i = 0; i < header.length; i++) {
     const first = seen.get(header[i]);
@@ -113,17 +142,11 @@ export function readTable(input: InputText, options: ReadTableOptions, ledger: L
   const fillCruise = !index.has('cruise') && options.cruise !== undefined;
   if (fillCruise) columns.cruise = [];
   const sourceLine: number[] = [];
-  let prevLines = records[0].info.lines;
-  let prevEmpty = records[0].info.empty_lines;
-  const rowsRead = records.length - 1;
+  const rowsRead = records.length;
   const row: unknown[] = new Array(names.length);
   const below: boolean[] = new Array(censored.length);
   const limits: number[] = new Array(censored.length);
-  for (let r = 1; r < records.length; r++) {
-    const { record, info } = records[r];
-    const line = prevLines + 1 + (info.empty_lines - prevEmpty);
-    prevLines = info.lines;
-    prevEmpty = info.empty_lines;
+  for (const { fields: record, line } of records) {
     const exclude = (reason: string, detail: string): void => ledger.add({ table: options.table, file, line, stage: 'load', action: 'excluded', reason, detail });
     if (record.length !== header.length) {
       exclude('ragged-row', msg.raggedRow(header.length, record.length));

@@ -4,3 +4,4 @@ export type { QuantityGrid } from './read-grids.js';
 export type { ProjectInputs } from './project-inputs.js';
 export { silentProgress, type Progress } from './progress.js';
 export { concatTables, loadTables, type FileCount, type LoadedTables } from './load-tables.js';
+export { decodeColumnarInputs } from './decode-columnar-inputs.js';

@@ -2,7 +2,7 @@
 import * as aq from 'arquero';
 import type { Config } from '../config/index.js';
 import type { Ledger } from '../ledger/index.js';
-import { decodeUtf8, readTable, type TableName } from '../load/index.js';
+import { decodeUtf8, isColumnarFile, readColumnar, readTable, type ColumnarText, type ReadTableResult, type TableName } from '../load/index.js';
 import type { InputBytes, Problem } from '../types.js';
 
 /** Rows read from one input file (the ledger invariant is checked per file). */
@@ -28,7 +28,7 @@ export interface LoadedTables {
 }
 
 /** Read every samples and cells file named in the config. */
-export function loadTables(config: Config, files: Map<string, InputBytes>, ledger: Ledger): LoadedTables {
+export function loadTables(config: Config, files: Map<string, InputBytes>, ledger: Ledger, columnar: Map<string, ColumnarText> = new Map()): LoadedTables {
   const out: LoadedTables = { samples: [], cells: [], counts: [], problems: [] };
   const entries: [TableName, Config['inputs']['samples'] | Config['inputs']['cells']][] = [
     ['samples', config.inputs.samples],
@@ -38,12 +38,20 @@ export function loadTables(config: Config, files: Map<string, InputBytes>, ledge
     for (const entry of list) {
       const bytes = files.get(entry.path);
       if (!bytes) throw new Error(`internal: file ${entry.path} was not read`);
-      const decoded = decodeUtf8(bytes);
-      if ('severity' in decoded) {
-        out.problems.push(decoded);
-        continue;
+      const options = { table, columns: entry.columns, delimiter: entry.delimiter, cruise: entry.cruise };
+      let result: ReadTableResult;
+      if (isColumnarFile(entry.path)) {
+        const decoded = columnar.get(entry.path);
+        if (!decoded) continue; // decodeColumnarInputs reported why
+        result = readColumnar(decoded, options, ledger);
+      } else {
+        const decoded = decodeUtf8(bytes);
+        if ('severity' in decoded) {
+          out.problems.push(decoded);
+          continue;
+        }
+        result = readTable(decoded, options, ledger);
       }
-      const result = readTable(decoded, { table, columns: entry.columns, delimiter: entry.delimiter, cruise: entry.cruise }, ledger);
       out.problems.push(...result.problems);
       out.counts.push({ table, file: entry.path, rowsRead: result.rowsRead });
       out[table].push(result.table);

@@ -68,7 +68,7 @@ export function runPipeline(inputs: ProjectInputs, progress: Progress = silentPr
   };
 
   progress.start('load');
-  const loaded = loadTables(config, inputs.files, ledger);
+  const loaded = loadTables(config, inputs.files, ledger, inputs.columnar);
   result.counts = loaded.counts;
   result.problems.push(...loaded.problems);
   const rowsRead = loaded.counts.reduce((s, c) => s + c.rowsRead, 0);
