@@ -7,7 +7,8 @@ export function sig(x: number | null | undefined, digits = 3): string {
   const mag = Math.floor(Math.log10(Math.abs(x)));
   if (mag >= 6 || mag < -4) return x.toExponential(digits - 1).replace('e+', 'e');
   const decimals = Math.max(0, digits - 1 - mag);
-  return x.toFixed(decimals);
+  // Whole numbers wider than `digits` are rounded too: 793946 to 3 figures is 794000.
+  return decimals === 0 ? String(Number(x.toPrecision(digits))) : x.toFixed(decimals);
 }
 
 /** A p value as text: '< 0.001' below 0.001, else 2 significant figures. */
