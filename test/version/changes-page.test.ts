@@ -10,6 +10,11 @@ const report = (changes: unknown): ReportModel => ({
   inventory: [],
   files: [],
   ledger: [],
+  findings: [],
+  conversions: [],
+  matchSources: [],
+  crossover: [],
+  crossoverSettings: { maxDistanceKm: 200, minDepthM: 1000, thresholdNmolKg: 0.1 },
   pages: ['index.html', 'changes.html'],
   sections: changes === undefined ? {} : { changes },
 });
