@@ -16,7 +16,7 @@ export function stationMap(ctx: FigureContext): SiteFigure {
     id: 'station-map',
     page: 'fields',
     title: 'Stations by cruise',
-    caption: `Bottle stations of ${cruises.length} cruises, ${stations.length} stations in all, on the ${projection} projection: ${perCruise}.`,
+    caption: `Bottle stations of ${cruises.length} cruises, ${stations.length} stations in all, on the ${projection} projection${perCruise ? `: ${perCruise}` : ''}.`,
     alt: `Map of ${stations.length} sampling stations coloured by cruise (${cruises.join(', ')}).`,
     svg: compactMap(map.svg),
     csv: rowsCsv(stations, ['cruise', 'station', 'lat', 'lon', 'samples']),
