@@ -16,8 +16,8 @@ describe('check(project) on the bad-input corpus', () => {
 
   for (const c of CASES) {
     const expected = EXPECTED[c.name];
-    it(`check(${c.name}) exits ${expected.exit}${expected.todo ? '' : ' with the expected messages'}`, () => {
-      const run = runCase(c);
+    it(`check(${c.name}) exits ${expected.exit}${expected.todo ? '' : ' with the expected messages'}`, async () => {
+      const run = await runCase(c);
       const text = run.lines.join('\n');
       expect(text).not.toContain('    at ');
       expect(text.toLowerCase()).not.toContain('internal error');
@@ -36,9 +36,9 @@ describe('check(project) on the bad-input corpus', () => {
 
 describe('checkProject(dir) agrees with the corpus runner', () => {
   for (const name of ['ragged sample row with an extra field', 'config with a wrong type', 'lat and lon swapped onto land', 'symlink pointing outside the project']) {
-    it(`checkProject(${name}) prints the expected lines`, () => {
+    it(`checkProject(${name}) prints the expected lines`, async () => {
       const c = CASES.find((k) => k.name === name);
-      expect(c && checkCase(c)).toEqual({ exit: EXPECTED[name].exit, lines: EXPECTED[name].lines });
+      expect(c && (await checkCase(c))).toEqual({ exit: EXPECTED[name].exit, lines: EXPECTED[name].lines });
     });
   }
 });

@@ -3,7 +3,7 @@ import { checkProject } from '../../lib/cli/check-project.js';
 import { formatProblem } from '../../lib/cli/format-problem.js';
 import { checkSummary } from '../../lib/cli/messages.js';
 import { readProject } from '../../lib/cli/read-project.js';
-import { hasErrors, runPipeline, type PipelineResult } from '../../lib/pipeline/index.js';
+import { decodeColumnarInputs, hasErrors, runPipeline, type PipelineResult } from '../../lib/pipeline/index.js';
 import type { LedgerEntry, Problem } from '../../lib/types.js';
 import type { CorpusCase } from './cases.js';
 import { makeProject } from './make-project.js';
@@ -26,9 +26,9 @@ export function writeCase(c: CorpusCase): string {
 }
 
 /** Run `check` on the case's project through checkProject itself (slower: the pipeline result is not kept). */
-export function checkCase(c: CorpusCase): { exit: number; lines: string[] } {
+export async function checkCase(c: CorpusCase): Promise<{ exit: number; lines: string[] }> {
   const lines: string[] = [];
-  const exit = checkProject(writeCase(c), undefined, (l) => lines.push(l));
+  const exit = await checkProject(writeCase(c), undefined, (l) => lines.push(l));
   return { exit, lines };
 }
 
@@ -36,10 +36,11 @@ export function checkCase(c: CorpusCase): { exit: number; lines: string[] } {
  * Run the case once and print what `check` prints, keeping the pipeline result: the same steps as checkProject
  * (lib/cli/check-project.ts), so one pipeline run gives both; `checkCase` confirms they agree.
  */
-export function runCase(c: CorpusCase): CaseRun {
+export async function runCase(c: CorpusCase): Promise<CaseRun> {
   const project = readProject(writeCase(c));
   const problems: Problem[] = [...project.problems];
-  const result = project.inputs ? runPipeline(project.inputs) : undefined;
+  if (project.inputs) problems.push(...(await decodeColumnarInputs(project.inputs)));
+  const result = project.inputs && !hasErrors(problems) ? runPipeline(project.inputs) : undefined;
   if (result) {
     problems.push(...result.problems);
     for (const e of result.ledger.entries) {
