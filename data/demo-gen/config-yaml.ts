@@ -158,7 +158,7 @@ export function configYaml(inputs: readonly CruiseInputs[], grids: readonly Grid
     '  projection: equal-earth',
     '  polar: [south-polar]  # the Southern Ocean cruise is easier to read on a polar map',
     '  depths_m: [0, 100, 1000]',
-    '  widths_mm: [85, 180]',
+    '  widths_mm: [85]  # single column; add 180 for double-column figures',
     '  dpi: [300]',
     '  max_points: 5000',
     '  hnlc_nitrate: 4',

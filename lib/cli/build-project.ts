@@ -75,7 +75,7 @@ export async function buildProject(options: BuildOptions): Promise<BuildOutcome>
   const report = buildReportModel(inputs.config, result, { version: next.version, date, toolVersion: packageVersion() });
   report.sections.changes = previous ? diffSnapshots(previous.snapshot, snapshot) : firstVersionChanges(snapshot);
   report.pages.push('changes.html');
-  const extras = await reportExtras(report, result, inputs.config, prettyJson(results));
+  const extras = await reportExtras(report, result, inputs.config, prettyJson(results), log);
   const out = options.out ?? join(project.dir, '_site');
   try {
     await writeSite(report, [...extras, ...archivedSiteFiles(project.dir, next.version)], out);

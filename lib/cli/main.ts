@@ -6,6 +6,7 @@ import { checkProject } from './check-project.js';
 import { initProject } from './init-project.js';
 import * as msg from './messages.js';
 import { demoCommand } from './demo-command.js';
+import { serveCommand } from './serve-command.js';
 import { diffCommand } from './diff-command.js';
 import { versionMessages } from '../version/index.js';
 
@@ -22,7 +23,7 @@ export async function main(argv: string[]): Promise<number> {
   }
   let parsed;
   try {
-    parsed = parseArgs({ args: rest, allowPositionals: true, options: { out: { type: 'string' }, config: { type: 'string' }, help: { type: 'boolean', short: 'h' } } });
+    parsed = parseArgs({ args: rest, allowPositionals: true, options: { out: { type: 'string' }, config: { type: 'string' }, port: { type: 'string' }, help: { type: 'boolean', short: 'h' } } });
   } catch (error) {
     log(error instanceof Error ? error.message : String(error));
     return 2;
@@ -49,6 +50,14 @@ export async function main(argv: string[]): Promise<number> {
         return 2;
       }
       return diffCommand(positionals[2] ?? '.', positionals[0], positionals[1], log);
+    case 'serve': {
+      const port = values.port === undefined ? 8080 : Number(values.port);
+      if (!Number.isInteger(port) || port < 0 || port > 65535) {
+        log(msg.badPort(values.port ?? ''));
+        return 2;
+      }
+      return serveCommand(positionals[0] ?? '.', { port, config: values.config, out: values.out }, log);
+    }
     case 'demo':
       return demoCommand(values.out, log);
     default:

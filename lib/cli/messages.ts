@@ -8,6 +8,8 @@ Usage:
   basinquota check [DIR]         validate the config and every input; exit 1 on any error
   basinquota build [DIR] [--out DIR] [--config FILE]
                                  run the pipeline and write the report site
+  basinquota serve [DIR] [--port N]
+                                 build, serve on http://127.0.0.1:N (default 8080), rebuild on changes
   basinquota diff VA VB [DIR]    what changed between two archived versions (e.g. v1 v2)
   basinquota demo [--out DIR]    build the shipped demo's two versions (default into _site-demo)
   basinquota --help | COMMAND --help
@@ -31,6 +33,10 @@ export const commandHelp: Record<string, string> = {
   Progress per stage goes to stderr. Exit 1 on invalid input, 3 on a disk error.
   The report version increases when the inputs, the config or the basinquota version changed since the
   latest version archived in DIR/archive/; an unchanged rebuild keeps the number and the bytes.
+`,
+  serve: `basinquota serve [DIR] [--port N] [--out DIR] [--config FILE]
+  Build the project, serve the site on http://127.0.0.1:N/ (default 8080; localhost only, never another
+  interface) and rebuild whenever the config or an input file changes. Stop with Ctrl-C.
 `,
   diff: `basinquota diff VA VB [DIR]
   Print what changed between two archived versions of the project in DIR (default .): data added or
@@ -60,3 +66,6 @@ export const cannotWrite = (dir: string, reason: string): string => `cannot writ
 /** Summary after check. */
 export const checkSummary = (errors: number, warnings: number): string =>
   errors === 0 ? `check passed${warnings ? ` with ${warnings} warning${warnings === 1 ? '' : 's'}` : ''}` : `check failed: ${errors} error${errors === 1 ? '' : 's'}${warnings ? `, ${warnings} warning${warnings === 1 ? '' : 's'}` : ''}`;
+
+/** A --port value that is not a port number. */
+export const badPort = (value: string): string => `--port "${value}" is not a port number (0–65535)`;

@@ -1,4 +1,4 @@
-// A tiny static file server on 127.0.0.1 with an ephemeral port, for serving a built site to a browser.
+// A small static file server bound to 127.0.0.1 (never another interface): `basinquota serve` and the browser tests use it.
 import { createReadStream, statSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
@@ -24,8 +24,8 @@ export interface StaticServer {
   close(): Promise<void>;
 }
 
-/** Serve the files under `root` (GET and HEAD; `/` is index.html; 404 outside root or when missing). */
-export async function serveStatic(root: string): Promise<StaticServer> {
+/** Serve the files under `root` on 127.0.0.1 (port 0 = any free port; GET and HEAD; `/` is index.html; 404 outside root or when missing). */
+export async function serveStatic(root: string, listenPort = 0): Promise<StaticServer> {
   const base = resolve(root);
   const server: Server = createServer((req, res) => {
     const url = new URL(req.url ?? '/', 'http://127.0.0.1');
@@ -46,7 +46,7 @@ export async function serveStatic(root: string): Promise<StaticServer> {
     if (req.method === 'HEAD') res.end();
     else createReadStream(path).pipe(res);
   });
-  await new Promise<void>((ok) => server.listen(0, '127.0.0.1', ok));
+  await new Promise<void>((ok) => server.listen(listenPort, '127.0.0.1', ok));
   const { port } = server.address() as AddressInfo;
   return {
     origin: `http://127.0.0.1:${port}`,
