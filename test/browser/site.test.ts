@@ -5,7 +5,7 @@ import { chromium, type Browser, type BrowserContext, type Page } from 'playwrig
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildDemoOnce, buildSite, DEMO_PATH, withTempCopy } from '../helpers/build-demo.js';
 import { REPO_ROOT } from '../helpers/run-cli.js';
-import { serveStatic, type StaticServer } from '../helpers/static-server.js';
+import { serveStatic, type StaticServer } from '../../lib/cli/static-server.js';
 
 const CHROMIUM = '/usr/bin/chromium';
 const HAVE_CHROMIUM = existsSync(CHROMIUM);
