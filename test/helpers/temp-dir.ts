@@ -15,9 +15,9 @@ export function tempDir(prefix: string): string {
   return dir;
 }
 
-/** Copy the project folder `dir` into a fresh temp folder; resolves to the copy's path. */
+/** Copy the project folder `dir` (without its archive and built site) into a fresh temp folder; resolves to the copy's path. */
 export function withTempCopy(dir: string): string {
   const copy = join(tempDir('project'), 'project');
-  cpSync(dir, copy, { recursive: true });
+  cpSync(dir, copy, { recursive: true, filter: (path) => !/[\\/](archive|_site)$/.test(path) });
   return copy;
 }
