@@ -1,9 +1,8 @@
 // The bad inputs: each a patch of the base project (make-project.ts) and what `check` must say about it.
-import { mkdtempSync, readFileSync, symlinkSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync, symlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { CELL_HEADER, SAMPLE_HEADER, cellRows, cellsCsv, sampleRows, samplesCsv, type ProjectPatch } from './make-project.js';
+import { CELL_HEADER, SAMPLE_HEADER, cellRows, cellsCsv, sampleRows, samplesCsv, tempDir, type ProjectPatch } from './make-project.js';
 
 /** One corpus case. */
 export interface CorpusCase {
@@ -181,7 +180,7 @@ export const CASES: CorpusCase[] = [
     name: 'symlink pointing outside the project',
     patch: { config: withCellInput((s) => (s.path = 'linked.csv')) },
     setup: (dir) => {
-      const outside = mkdtempSync(join(tmpdir(), 'bq-outside-'));
+      const outside = tempDir('bq-outside-');
       writeFileSync(join(outside, 'cells.csv'), cellsCsv());
       symlinkSync(join(outside, 'cells.csv'), join(dir, 'linked.csv'));
     },

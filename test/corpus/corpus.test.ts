@@ -1,11 +1,13 @@
 // Bad-input corpus: every case through `check` in-process (exact lines and exit code), the ledger invariant, no crash.
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { CASES } from './cases.js';
 import { EXPECTED } from './expected.js';
-import { makeProject } from './make-project.js';
+import { makeProject, removeProjects } from './make-project.js';
 import { checkCase, ledgerBalance, runCase, valueNotes } from './run-case.js';
+
+afterAll(() => removeProjects());
 
 describe('check(project) on the bad-input corpus', () => {
   it('has at least 50 distinct cases, each with an expectation', () => {

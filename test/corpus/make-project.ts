@@ -1,5 +1,5 @@
 // A minimal valid synthesis project, written to a temp folder, from which every bad-input case is made by one patch.
-import { mkdtempSync, mkdirSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { stringify } from 'yaml';
@@ -86,9 +86,23 @@ export interface ProjectPatch {
   omit?: string[];
 }
 
+const made: string[] = [];
+
+/** Remove every folder makeProject (and `extraDirs`) wrote in this process. */
+export function removeProjects(extraDirs: readonly string[] = []): void {
+  for (const dir of [...made.splice(0), ...extraDirs]) rmSync(dir, { recursive: true, force: true });
+}
+
+/** A fresh temp folder removed by removeProjects. */
+export function tempDir(prefix: string): string {
+  const dir = mkdtempSync(join(tmpdir(), prefix));
+  made.push(dir);
+  return dir;
+}
+
 /** Write the base project with `patch` applied into a fresh temp folder; returns the folder. */
 export function makeProject(patch: ProjectPatch = {}): string {
-  const dir = mkdtempSync(join(tmpdir(), 'bq-corpus-'));
+  const dir = tempDir('bq-corpus-');
   const files: Record<string, string | Uint8Array> = { 'samples.csv': samplesCsv(), 'cells.csv': cellsCsv(), ...patch.files };
   for (const name of patch.omit ?? []) delete files[name];
   const config = patch.config ? patch.config(baseConfig()) : baseConfig();
