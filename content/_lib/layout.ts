@@ -20,8 +20,8 @@ export const NAV: NavItem[] = [
   { href: 'supplement.html', label: 'Supplement' },
 ];
 
-/** Content-Security-Policy: nothing may load from outside the site. */
-export const CSP = "default-src 'none'; img-src 'self' data:; style-src 'self'; font-src 'self'; script-src 'none'; base-uri 'none'; form-action 'none'";
+/** Content-Security-Policy: nothing may load from outside the site and no script runs; inline style attributes (MathML, SVG) are allowed. */
+export const CSP = "default-src 'none'; img-src 'self' data:; style-src 'self' 'unsafe-inline'; font-src 'self'; script-src 'none'; base-uri 'none'; form-action 'none'";
 
 /** Wrap a page body in the report frame; `root` is the relative path back to the site root ('' or '../../'). */
 export function layout(report: ReportModel, page: { title: string; href: string; body: SafeHtml; root?: string }): string {

@@ -69,3 +69,7 @@ export const checkSummary = (errors: number, warnings: number): string =>
 
 /** A --port value that is not a port number. */
 export const badPort = (value: string): string => `--port "${value}" is not a port number (0–65535)`;
+
+/** A count of ledger rows that were kept but converted or flagged, printed by check. */
+export const ledgerCount = (table: string, action: string, reason: string, count: number): string =>
+  `note: ${count} ${table} row${count === 1 ? '' : 's'} ${action} (${reason}); see the ledger for each row`;

@@ -3,6 +3,7 @@ import { CELL_COLUMNS, SAMPLE_COLUMNS } from '../load/canonical.js';
 import * as msg from './messages.js';
 import type { Config } from './schema.js';
 import { checkRelativePath } from './project-path.js';
+import { formatPath } from './format-path.js';
 
 /** Optional checks supplied by other stages (e.g. the unit parser). */
 export interface SemanticHooks {
@@ -27,6 +28,12 @@ export function checkConfigSemantics(config: Config, hooks: SemanticHooks): Sema
     const message = checkRelativePath(value);
     if (message) out.push({ path, message });
   };
+  const firstUse = new Map<string, string>();
+  const checkOnce = (path: PropertyKey[], value: string): void => {
+    const where = firstUse.get(value);
+    if (where) out.push({ path, message: msg.pathTwice(value, where) });
+    else firstUse.set(value, formatPath(path.slice(0, -1)));
+  };
   const tables = [
     ['samples', config.inputs.samples, SAMPLE_COLUMNS],
     ['cells', config.inputs.cells, CELL_COLUMNS],
@@ -34,6 +41,7 @@ export function checkConfigSemantics(config: Config, hooks: SemanticHooks): Sema
   for (const [table, entries, known] of tables) {
     entries.forEach((entry, i) => {
       checkPath(['inputs', table, i, 'path'], entry.path);
+      checkOnce(['inputs', table, i, 'path'], entry.path);
       for (const name of Object.keys(entry.columns)) {
         if (!(name in known)) out.push({ path: ['inputs', table, i, 'columns', name], message: msg.unknownCanonicalColumn(name, table.slice(0, -1)), atKey: true });
       }

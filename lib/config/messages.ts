@@ -39,3 +39,10 @@ export const factorMissing = (cls: string): string =>
 
 /** The config file itself could not be found. */
 export const configNotFound = (path: string): string => `no basinquota.yaml in ${path}`;
+
+/** A mapping key that breaks the naming rule of its section (class ids). */
+export const badKey = (key: string, section: string): string =>
+  `"${key}" is not a valid name under ${section}: use lower-case letters, digits, "_" or "-", starting with a letter (put other spellings in aliases)`;
+
+/** The same input file listed twice. */
+export const pathTwice = (path: string, first: string): string => `"${path}" is already listed as ${first}; each file is read once`;

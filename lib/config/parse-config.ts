@@ -78,6 +78,10 @@ function describeIssue(issue: z.core.$ZodIssue, data: unknown): { path: Property
     }
     case 'invalid_value':
       return [{ path, message: `expected one of: ${issue.values.map((v) => JSON.stringify(v)).join(', ')}; got ${describeValue(valueAt(data, path))}`, atKey: false }];
+    case 'invalid_key': {
+      const key = String(path[path.length - 1] ?? '');
+      return [{ path, message: msg.badKey(key, formatPath(path.slice(0, -1))), atKey: true }];
+    }
     case 'invalid_union': {
       const value = valueAt(data, path);
       return [{ path, message: `${describeValue(value)} is not a valid setting here (see the schema description of ${formatPath(path) || 'this key'})`, atKey: false }];

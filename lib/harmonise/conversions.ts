@@ -1,4 +1,5 @@
-import { unitConversion, type UnitConversion } from '../units/index.js';
+import { canonicalUnit, unitConversion, type UnitConversion } from '../units/index.js';
+import { unitMissing } from './messages.js';
 
 /** Resolve the configured units of a file (throws naming file and column on a bad unit); `<q>_dl` and `<el>_sigma` follow their quantity unless set. */
 export function resolveConversions(units: Record<string, string> | undefined, file: string, followers: Record<string, string>): Map<string, UnitConversion> {
@@ -14,4 +15,16 @@ export function resolveConversions(units: Record<string, string> | undefined, fi
 /** True when a conversion changes values (not the identity). */
 export function isIdentity(c: UnitConversion | undefined): boolean {
   return c === undefined || (c.factor === 1 && !c.perVolume);
+}
+
+/** Unit kinds that are never assumed: a concentration or content without a stated unit is ambiguous (nM vs nmol/kg, fmol vs mol). */
+const MUST_STATE = new Set(['concentration', 'content', 'carbon']);
+
+/** Throw (naming file and column) when a concentration or content column holds values but the config gives it no unit. */
+export function requireStatedUnits(columns: readonly string[], hasValues: (column: string) => boolean, conversions: Map<string, UnitConversion>, file: string): void {
+  for (const column of columns) {
+    const kind = canonicalUnit(column)?.kind;
+    if (kind === undefined || !MUST_STATE.has(kind) || conversions.has(column) || /_(dl|sigma)$/.test(column)) continue;
+    if (hasValues(column)) throw new Error(unitMissing(file, column, canonicalUnit(column)!.unit));
+  }
 }

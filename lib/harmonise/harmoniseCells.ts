@@ -2,7 +2,7 @@ import * as aq from 'arquero';
 import type { Ledger } from '../ledger/index.js';
 import { CELL_COLUMNS, ELEMENTS } from '../load/canonical.js';
 import { numberColumn, sourceLines, textColumn } from './columns.js';
-import { isIdentity, resolveConversions } from './conversions.js';
+import { isIdentity, requireStatedUnits, resolveConversions } from './conversions.js';
 import { replaceFillValues } from './fillValues.js';
 import { duplicateCellId } from './messages.js';
 import { DEFAULT_FILL_VALUES, type CellHarmoniseOptions } from './options.js';
@@ -48,6 +48,7 @@ export function harmoniseCells(table: aq.ColumnTable, options: CellHarmoniseOpti
   const n = table.numRows();
   const rows = new RowLedger(ledger, tableName, file, sourceLines(table, file));
   const conversions = resolveConversions(options.units, file, FOLLOWERS);
+  requireStatedUnits(table.columnNames(), (c) => (table.array(c) as ArrayLike<unknown>).length > 0 && Array.from(table.array(c) as ArrayLike<unknown>).some((v) => typeof v === 'number' && Number.isFinite(v)), conversions, file);
   const names = table.columnNames();
   checkDuplicateIds(textColumn(table, 'cell_id'), rows);
 

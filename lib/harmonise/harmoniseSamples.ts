@@ -4,7 +4,7 @@ import { SAMPLE_COLUMNS, SAMPLE_QUANTITIES } from '../load/canonical.js';
 import type { QualityFlag } from '../types.js';
 import { depthFromPressure, pressureFromDepth, seawaterDensity, t68FromT90 } from '../units/index.js';
 import { booleanColumn, numberColumn, sourceLines, textColumn } from './columns.js';
-import { isIdentity, resolveConversions } from './conversions.js';
+import { isIdentity, requireStatedUnits, resolveConversions } from './conversions.js';
 import { replaceFillValues } from './fillValues.js';
 import { defaultDensity, depthPressureMismatch, duplicateBottle } from './messages.js';
 import { DEFAULT_DENSITY, DEFAULT_FILL_VALUES, type SampleHarmoniseOptions } from './options.js';
@@ -30,6 +30,7 @@ export function harmoniseSamples(table: aq.ColumnTable, options: SampleHarmonise
   const n = table.numRows();
   const rows = new RowLedger(ledger, tableName, file, sourceLines(table, file));
   const conversions = resolveConversions(options.units, file, FOLLOWERS);
+  requireStatedUnits(table.columnNames(), (c) => (table.array(c) as ArrayLike<unknown>).length > 0 && Array.from(table.array(c) as ArrayLike<unknown>).some((v) => typeof v === 'number' && Number.isFinite(v)), conversions, file);
   const names = table.columnNames();
   const present = (c: string) => names.includes(c);
 

@@ -81,3 +81,8 @@ function round(x: number): string {
 export function positionMissing(lat: number, lon: number): string {
   return `position missing (lat ${lat}, lon ${lon}); the row is kept but cannot be mapped or checked against land`;
 }
+
+/** A concentration or content column with values but no unit in the config. */
+export function unitMissing(file: string, column: string, canonical: string): string {
+  return `${file}: no unit given for column ${column}; add it to the file's units in the config (e.g. ${column}: ${canonical}) — units are never assumed`;
+}

@@ -84,7 +84,7 @@ function put(cols: QuantityColumns, o: number, value: number, source: AmbientSou
  * (bottle depth offset, m), `ambient_<q>_distance_km` (grid), `ambient_<q>_quality`, `ambient_<q>_below_dl`, and
  * `position_source` ('cell' | 'station'). Order of preference: nearest bottle of the same cruise, station (and cast) within
  * the depth tolerance; linear interpolation between bracketing bottles of one cast; the first grid of q with a value.
- * A cell with no ambient value stays (ledger 'flagged', 'no-ambient-<q>'); only a cell with no position is excluded.
+ * A cell with no ambient dFe or nitrate stays (ledger 'flagged', 'no-ambient-<q>'); only a cell with no position is excluded.
  */
 export function matchCells(
   cells: aq.ColumnTable,
@@ -212,7 +212,8 @@ export function matchCells(
         continue;
       }
       put(cols, o, Number.NaN, 'none', Number.NaN, Number.NaN, 'missing', false);
-      note(i, 'flagged', `no-ambient-${q}`, noAmbient(q, `${why()}; ${noGridValue(maxKm, qGrids.length)}`));
+      // Only the quantities every cell needs are ledgered; an optional one (phosphate, T, S …) missing is normal.
+      if ((REQUIRED_QUANTITIES as readonly string[]).includes(q)) note(i, 'flagged', `no-ambient-${q}`, noAmbient(q, `${why()}; ${noGridValue(maxKm, qGrids.length)}`));
     }
   }
 

@@ -4,6 +4,7 @@ import type { Config } from '../config/index.js';
 import { harmoniseCells, harmoniseSamples, type HarmoniseSummary } from '../harmonise/index.js';
 import type { Ledger } from '../ledger/index.js';
 import type { QualityFlag } from '../types.js';
+import { dropCrossFileDuplicates } from './cross-file-duplicates.js';
 
 /** Harmonised per-file tables and their summaries. */
 export interface HarmonisedTables {
@@ -47,5 +48,6 @@ export function harmoniseTables(config: Config, samples: aq.ColumnTable[], cells
     out.cells.push(result.table);
     out.summaries.push(result.summary);
   });
+  out.samples = dropCrossFileDuplicates(out.samples, ledger);
   return out;
 }

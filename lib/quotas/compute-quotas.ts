@@ -12,7 +12,8 @@ import {
   picogramsCarbonToMol,
 } from './carbon-from-biovolume.js';
 import { carbonFromPhosphorus, REDFIELD_C_TO_P } from './carbon-from-phosphorus.js';
-import { missingInput, noCarbon, nonPositiveContent, noSigma, unknownClass } from './messages.js';
+import { missingInput, noCarbon, nonPositiveContent,
+  missingContent, noSigma, unknownClass } from './messages.js';
 import type { ClassSpec, QuotaOptions } from './quota-options.js';
 import { classResolver } from './resolve-class.js';
 import { ratioWithSigma } from './ratio-with-sigma.js';
@@ -140,7 +141,11 @@ export function computeQuotas(cells: aq.ColumnTable, options: QuotaOptions, ledg
       note(i, 'excluded', 'unknown-class', unknownClass(rawClass[i]));
       continue;
     }
-    if (!(Number.isFinite(fe[i]) && fe[i] > 0)) {
+    if (!Number.isFinite(fe[i])) {
+      note(i, 'excluded', 'missing-content', missingContent('fe'));
+      continue;
+    }
+    if (fe[i] <= 0) {
       note(i, 'excluded', 'non-positive-content', nonPositiveContent('fe', fe[i]));
       continue;
     }

@@ -10,9 +10,14 @@ export function duplicateAlias(alias: string, first: string, second: string): st
   return `class alias "${alias}" is listed for both "${first}" and "${second}"`;
 }
 
-/** A cell whose Fe content is missing, zero or negative. */
+/** A cell whose Fe content is zero or negative. */
 export function nonPositiveContent(element: string, value: number): string {
   return `${element} content ${String(value)} mol/cell is not a positive number; cell excluded`;
+}
+
+/** A cell with no Fe content at all (empty, NA, a fill value or below detection). */
+export function missingContent(element: string): string {
+  return `${element} content is missing (empty, a fill value or below detection); cell excluded`;
 }
 
 /** A cell whose carbon could not be obtained by its class's method. */

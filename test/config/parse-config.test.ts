@@ -102,6 +102,12 @@ describe('parseConfig', () => {
     ]);
   });
 
+  it('parseConfig(class id with capitals) explains the naming rule', () => {
+    expect(located(VALID.replace('  diatom:\n', '  Diatom:\n'))).toEqual([
+      'basinquota.yaml:14:3 classes.Diatom: "Diatom" is not a valid name under classes: use lower-case letters, digits, "_" or "-", starting with a letter (put other spellings in aliases)',
+    ]);
+  });
+
   it('parseConfig(a list where a mapping is expected) says so', () => {
     expect(located('- just\n- a list\n')).toEqual(['basinquota.yaml:1:1 expected a mapping of settings (report, inputs, classes …) at the top level']);
   });

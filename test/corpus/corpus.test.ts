@@ -54,9 +54,12 @@ describe('basinquota check DIR (real CLI)', () => {
     return c;
   };
 
-  it('check(base project) exits 0 and prints "check passed"', () => {
+  it('check(base project) exits 0 and ends with "check passed"', () => {
     const out = cli(makeProject());
-    expect({ status: out.status, output: `${out.stdout}${out.stderr}`.trim() }).toEqual({ status: 0, output: 'check passed' });
+    const lines = `${out.stdout}${out.stderr}`.trim().split('\n');
+    expect({ status: out.status, last: lines[lines.length - 1] }).toEqual({ status: 0, last: 'check passed' });
+    // Only counts of kept-but-converted rows precede it: the base cells take their station's position.
+    expect(lines.slice(0, -1)).toEqual(['note: 18 cells rows converted (station-position); see the ledger for each row']);
   });
 
   it('check(semicolon samples) exits 1 with the delimiter message and no stack trace', () => {

@@ -1,7 +1,6 @@
 // Run one corpus case in-process: the `check` output and exit code, the pipeline result for the ledger invariant.
 import { checkProject } from '../../lib/cli/check-project.js';
-import { formatProblem } from '../../lib/cli/format-problem.js';
-import { checkSummary } from '../../lib/cli/messages.js';
+import { checkReport } from '../../lib/cli/check-report.js';
 import { readProject } from '../../lib/cli/read-project.js';
 import { decodeColumnarInputs, hasErrors, runPipeline, type PipelineResult } from '../../lib/pipeline/index.js';
 import type { LedgerEntry, Problem } from '../../lib/types.js';
@@ -41,17 +40,9 @@ export async function runCase(c: CorpusCase): Promise<CaseRun> {
   const problems: Problem[] = [...project.problems];
   if (project.inputs) problems.push(...(await decodeColumnarInputs(project.inputs)));
   const result = project.inputs && !hasErrors(problems) ? runPipeline(project.inputs) : undefined;
-  if (result) {
-    problems.push(...result.problems);
-    for (const e of result.ledger.entries) {
-      if (e.action === 'excluded') problems.push({ file: e.file, line: e.line, col: 0, message: `${e.reason}: ${e.detail} (row excluded)`, severity: 'warning' });
-    }
-  }
-  problems.sort((a, b) => a.file.localeCompare(b.file) || a.line - b.line);
-  const lines = problems.map(formatProblem);
-  const errors = problems.filter((p) => p.severity === 'error').length;
-  lines.push(checkSummary(errors, problems.length - errors));
-  return { exit: hasErrors(problems) ? 1 : 0, lines, result };
+  if (result) problems.push(...result.problems);
+  const { lines, exit } = checkReport(problems, result?.ledger);
+  return { exit, lines, result };
 }
 
 /** One ledger row as `file:line action reason: detail`. */

@@ -4,12 +4,16 @@ import { Ledger } from '../../lib/ledger/index.js';
 import { harmoniseCells } from '../../lib/harmonise/harmoniseCells.js';
 import type { CellHarmoniseOptions } from '../../lib/harmonise/options.js';
 import { cellTable } from '../fixtures/harmonise/tables.js';
+import { ELEMENTS } from '../../lib/load/canonical.js';
 
 const FILE = 'data/cells.csv';
 
+/** Contents and carbon in their canonical unit unless a test says otherwise (the stage never assumes a unit). */
+const CANONICAL_UNITS = Object.fromEntries([...ELEMENTS, 'carbon'].map((c) => [c, 'mol/cell']));
+
 function run(table: aq.ColumnTable, options: Partial<CellHarmoniseOptions> = {}) {
   const ledger = new Ledger();
-  const result = harmoniseCells(table, { file: FILE, ...options }, ledger);
+  const result = harmoniseCells(table, { file: FILE, ...options, units: { ...CANONICAL_UNITS, ...options.units } }, ledger);
   // Ledger invariant (DESIGN.md): rows in = rows out + excluded rows.
   expect(result.table.numRows() + ledger.excluded('cells', FILE).length).toBe(table.numRows());
   expect(result.summary.rowsIn).toBe(result.summary.rowsOut + result.summary.excluded);

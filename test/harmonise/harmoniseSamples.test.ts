@@ -7,9 +7,12 @@ import { sampleTable } from '../fixtures/harmonise/tables.js';
 
 const FILE = 'data/bottles.csv';
 
+/** Every quantity in its canonical unit unless a test says otherwise (the stage never assumes a unit). */
+const CANONICAL_UNITS = { dissolved_fe: 'nmol/kg', nitrate: 'µmol/kg', phosphate: 'µmol/kg', silicate: 'µmol/kg' };
+
 function run(table: aq.ColumnTable, options: Partial<SampleHarmoniseOptions> = {}) {
   const ledger = new Ledger();
-  const result = harmoniseSamples(table, { file: FILE, ...options }, ledger);
+  const result = harmoniseSamples(table, { file: FILE, ...options, units: { ...CANONICAL_UNITS, ...options.units } }, ledger);
   // Ledger invariant (DESIGN.md): rows in = rows out + excluded rows, one 'excluded' entry each.
   expect(result.table.numRows() + ledger.excluded('samples', FILE).length).toBe(table.numRows());
   expect(result.summary.rowsIn).toBe(result.summary.rowsOut + result.summary.excluded);
@@ -285,5 +288,14 @@ describe('harmoniseSamples: temperature scale', () => {
     expect(col(run(t, { units: { dissolved_fe: 'nmol/L' }, temperatureScale: 'ipts68' }).table, 'dissolved_fe')[0] as number).toBeCloseTo(1000 / 1023.34306, 8);
     // Read as ITS-90, 25 °C is T68 = 25.006, a slightly lighter water: the result differs.
     expect(col(run(t, { units: { dissolved_fe: 'nmol/L' } }).table, 'dissolved_fe')[0] as number).not.toBeCloseTo(1000 / 1023.34306, 8);
+  });
+});
+
+describe('harmoniseSamples(table, options, ledger): stated units', () => {
+  it('refuses a concentration column with values but no unit in the config, naming file and column', () => {
+    const t = sampleTable([{ dissolved_fe: 0.4 }]);
+    expect(() => harmoniseSamples(t, { file: FILE, units: { nitrate: 'µmol/kg', phosphate: 'µmol/kg', silicate: 'µmol/kg' } }, new Ledger())).toThrow(
+      'data/bottles.csv: no unit given for column dissolved_fe; add it to the file\'s units in the config (e.g. dissolved_fe: nmol/kg) — units are never assumed',
+    );
   });
 });
