@@ -14,9 +14,9 @@ export interface KeyFinding {
 
 /** Where the findings link to (figure anchors on the Quotas and Anomalies pages). */
 export const FINDING_LINKS = {
-  fit: { href: 'quotas.html#fec-vs-dfe', linkText: 'Fe:C against dFe' },
-  classes: { href: 'quotas.html#class-differences', linkText: 'class comparison' },
-  anomalies: { href: 'anomalies.html#anomaly-table', linkText: 'regional anomalies' },
+  fit: { href: 'quotas.html#fig-fe-c-vs-dfe', linkText: 'Fe:C against dFe' },
+  classes: { href: 'quotas.html#differences', linkText: 'class comparison' },
+  anomalies: { href: 'anomalies.html#fig-residual-map', linkText: 'regional anomalies' },
 } as const;
 
 const capitalise = (s: string): string => s.charAt(0).toUpperCase() + s.slice(1);

@@ -86,6 +86,13 @@ export const builtinBasinBoundaries: readonly string[] = [
 
 /** Our own coarse partition of the world ocean into seven basins (rules in builtinBasinRules); every point on the globe lies in exactly one. */
 export function builtinBasins(): RegionCollection {
+  // The partition is a constant: build it once, so its region index (memoised per object) is built once too. Do not mutate it.
+  return (builtin ??= buildBasins());
+}
+
+let builtin: RegionCollection | undefined;
+
+function buildBasins(): RegionCollection {
   const d = (path: LonLat[]) => densifyPath(path, BASIN_DENSIFY_DEG);
   const rev = (path: LonLat[]) => d(path).reverse();
   const rings: Record<string, LonLat[][]> = {

@@ -37,13 +37,24 @@ export interface RegionIndex {
   assign(lon: number, lat: number): string | null;
 }
 
+// One index per scheme object: building it costs ~0.3 s for the basins, and the same scheme is used on every build.
+const memo = new WeakMap<RegionCollection, RegionIndex>();
+
 /**
- * An index over a region scheme for fast point lookup: a 0.5° raster marks cells crossed by an edge;
+ * An index over a region scheme for fast point lookup (built once per scheme object): a 0.5° raster marks cells crossed by an edge;
  * other cells are inside or outside as a whole (one d3-geo geoContains per connected patch), so only
  * points near a boundary pay for the exact spherical test. Regions with properties.box are tested by
  * arithmetic. Results are cached per coordinate pair.
  */
 export function regionIndex(regions: RegionCollection): RegionIndex {
+  const known = memo.get(regions);
+  if (known) return known;
+  const index = buildIndex(regions);
+  memo.set(regions, index);
+  return index;
+}
+
+function buildIndex(regions: RegionCollection): RegionIndex {
   const prepared = regions.features.map(prepare);
   const buckets: number[][] = Array.from({ length: B_LON * B_LAT }, () => []);
   prepared.forEach((r, k) => {
@@ -98,16 +109,9 @@ export function regionIndex(regions: RegionCollection): RegionIndex {
   };
 }
 
-const memo = new WeakMap<RegionCollection, RegionIndex>();
-
 /** Id of the first region containing (lon, lat) or null (d3-geo geoContains); the index is built once per scheme object. */
 export function assignRegion(regions: RegionCollection, lon: number, lat: number): string | null {
-  let index = memo.get(regions);
-  if (!index) {
-    index = regionIndex(regions);
-    memo.set(regions, index);
-  }
-  return index.assign(lon, lat);
+  return regionIndex(regions).assign(lon, lat);
 }
 
 function prepare(feature: RegionFeature): Prepared {
