@@ -4,6 +4,7 @@ import { dirname, join, resolve } from 'node:path';
 import Eleventy from '@11ty/eleventy';
 import type { ExtraFile, ReportModel } from '../site/index.js';
 import { PACKAGE_ROOT } from './package-info.js';
+import { recoverStaleBuilds } from './stale-builds.js';
 
 export type { ExtraFile };
 
@@ -11,6 +12,7 @@ export type { ExtraFile };
 export async function writeSite(report: ReportModel, extras: ExtraFile[], outDirArg: string): Promise<void> {
   const outDir = resolve(outDirArg);
   mkdirSync(dirname(outDir), { recursive: true });
+  recoverStaleBuilds(outDir);
   const tmp = `${outDir}.tmp-${process.pid}`;
   rmSync(tmp, { recursive: true, force: true });
   try {
