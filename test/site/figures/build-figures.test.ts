@@ -138,3 +138,13 @@ describe('pageSections(result, config) on the demo', () => {
     expect(rows[0].mostInfluential).toMatch(/ \/ /);
   });
 });
+
+describe('demo figure snapshots', () => {
+  it('each demo figure’s SVG and Vega-Lite spec match the committed snapshots (review their diffs on purpose)', async () => {
+    for (const e of built.entries) {
+      await expect(e.svg, e.id).toMatchFileSnapshot(`__snapshots__/demo/${e.id}.svg`);
+      const spec = built.files.find((f) => f.path === `supplement/figures/${e.id}.spec.json`);
+      if (spec) await expect(String(spec.data), e.id).toMatchFileSnapshot(`__snapshots__/demo/${e.id}.spec.json`);
+    }
+  });
+});
