@@ -1,11 +1,20 @@
-// `basinquota init DIR`: a new project copied from the shipped example (the version-1 demo project).
-import { cpSync, existsSync, mkdirSync, readdirSync, renameSync } from 'node:fs';
-import { join } from 'node:path';
+// `basinquota init DIR`: a new project made from the shipped example (version 1 of the demo): its config and the files it names.
+import { copyFileSync, existsSync, mkdirSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+import { parseConfig } from '../config/index.js';
 import * as msg from './messages.js';
 import { PACKAGE_ROOT } from './package-info.js';
 
-/** Files of the example project that init does not copy. */
-const SKIP = new Set(['archive', '_site', '.basinquota-cache', 'truth.json', 'truth-cells.csv', 'README.md', 'basinquota.yaml']);
+/** The example's config inside the package. */
+const EXAMPLE_CONFIG = join(PACKAGE_ROOT, 'data', 'demo', 'basinquota.v1.yaml');
+
+/** The comment block that opens a project made by init (replacing the demo's own header). */
+const HEADER = `# basinquota synthesis project, made by \`basinquota init\` from the shipped example.
+# The example data are invented (programme, ships, cruises, people). Replace the files under samples/,
+# cells/ and grids/ with your own, map your column headers and units below, then run
+#   basinquota check .    and    basinquota build .
+# Editors can validate this file against schema/basinquota.schema.json of the basinquota package.
+`;
 
 /** Write an example project into `dir`; returns the exit code (0, or 2 when dir is not empty). */
 export function initProject(dir: string, log: (line: string) => void): number {
@@ -13,14 +22,18 @@ export function initProject(dir: string, log: (line: string) => void): number {
     log(msg.initNotEmpty(dir));
     return 2;
   }
+  const text = readFileSync(EXAMPLE_CONFIG, 'utf8');
+  const { config } = parseConfig('basinquota.yaml', text);
+  if (!config) throw new Error('the shipped example config does not validate');
   mkdirSync(dir, { recursive: true });
-  const example = join(PACKAGE_ROOT, 'data', 'demo');
-  for (const name of readdirSync(example)) {
-    if (SKIP.has(name)) continue;
-    cpSync(join(example, name), join(dir, name), { recursive: true });
+  const paths = [...config.inputs.samples, ...config.inputs.cells, ...config.inputs.grids].map((e) => e.path);
+  for (const path of paths) {
+    mkdirSync(dirname(join(dir, path)), { recursive: true });
+    copyFileSync(join(PACKAGE_ROOT, 'data', 'demo', path), join(dir, path));
   }
-  // The example is the first version of the demo: its config becomes the project's config.
-  if (existsSync(join(dir, 'basinquota.v1.yaml'))) renameSync(join(dir, 'basinquota.v1.yaml'), join(dir, 'basinquota.yaml'));
+  // Keep the example's explanatory comments on the settings; only the opening block is the demo's own.
+  const body = text.replace(/^(#[^\n]*\n)+\n?/, '');
+  writeFileSync(join(dir, 'basinquota.yaml'), `${HEADER}\n${body}`);
   log(`wrote an example project to ${dir}; edit ${join(dir, 'basinquota.yaml')} and run basinquota check ${dir}`);
   return 0;
 }

@@ -1,14 +1,7 @@
 #!/usr/bin/env node
-// The basinquota command line: the only shell around the pure core.
+// The basinquota command line: the only shell around the pure core. Commands load lazily, so --help is instant.
 import { parseArgs } from 'node:util';
-import { buildProject } from './build-project.js';
-import { checkProject } from './check-project.js';
-import { initProject } from './init-project.js';
 import * as msg from './messages.js';
-import { demoCommand } from './demo-command.js';
-import { serveCommand } from './serve-command.js';
-import { diffCommand } from './diff-command.js';
-import { versionMessages } from '../version/index.js';
 
 const log = (line: string): void => {
   process.stderr.write(`${line}\n`);
@@ -39,27 +32,27 @@ export async function main(argv: string[]): Promise<number> {
         process.stderr.write(msg.commandHelp.init);
         return 2;
       }
-      return initProject(positionals[0], log);
+      return (await import('./init-project.js')).initProject(positionals[0], log);
     case 'check':
-      return checkProject(positionals[0] ?? '.', values.config, log);
+      return (await import('./check-project.js')).checkProject(positionals[0] ?? '.', values.config, log);
     case 'build':
-      return (await buildProject({ dir: positionals[0] ?? '.', config: values.config, out: values.out, log })).code;
+      return (await (await import('./build-project.js')).buildProject({ dir: positionals[0] ?? '.', config: values.config, out: values.out, log })).code;
     case 'diff':
       if (positionals.length < 2 || positionals.length > 3) {
-        log(versionMessages.diffUsage());
+        log((await import('../version/index.js')).versionMessages.diffUsage());
         return 2;
       }
-      return diffCommand(positionals[2] ?? '.', positionals[0], positionals[1], log);
+      return (await import('./diff-command.js')).diffCommand(positionals[2] ?? '.', positionals[0], positionals[1], log);
     case 'serve': {
       const port = values.port === undefined ? 8080 : Number(values.port);
       if (!Number.isInteger(port) || port < 0 || port > 65535) {
         log(msg.badPort(values.port ?? ''));
         return 2;
       }
-      return serveCommand(positionals[0] ?? '.', { port, config: values.config, out: values.out }, log);
+      return (await import('./serve-command.js')).serveCommand(positionals[0] ?? '.', { port, config: values.config, out: values.out }, log);
     }
     case 'demo':
-      return demoCommand(values.out, log);
+      return (await import('./demo-command.js')).demoCommand(values.out, log);
     default:
       log(msg.unknownCommand(command));
       return 2;
