@@ -1,6 +1,5 @@
 import {
   aicc,
-  bootstrapByGroup,
   michaelisMenten,
   tQuantile,
   type Interval,
@@ -8,6 +7,7 @@ import {
 } from '../stats/index.js';
 import type { ClassData } from './class-data.js';
 import { bandsFor } from './bands.js';
+import { bootstrapClass } from './bootstrap-class.js';
 import { imputedSigmas, noFeCSigma, noModelFitted, primaryFallback, zeroDFeSigma } from './messages.js';
 import { powerLawCore, type PowerLawCore } from './power-law-core.js';
 import type { ClassFit, ModelFit, ModelName, ParameterEstimate, ResolvedFitOptions } from './types.js';
@@ -36,37 +36,14 @@ export function fitClass(name: string, d: ClassData, o: ResolvedFitOptions): Cla
   const cores = new Map<ModelName, PowerLawCore | MichaelisMentenFit>();
   const failures = new Map<ModelName, string>();
   for (const m of models) {
-    const r = fitOne(m, d.lx, d.ly, d.dFe, d.feC, prep, o, undefined);
+    const r = fitOne(m, d.lx, d.ly, d.dFe, d.feC, prep, o);
     if (typeof r === 'string') failures.set(m, r);
     else cores.set(m, r);
   }
   // One bootstrap draw serves every model, so all models see the same resampled stations.
   const fitted = models.filter((m) => cores.has(m));
   let boot: { intervals: Interval[]; failed: number[] } | null = null;
-  if (o.bootstrap.n > 0 && fitted.length > 0) {
-    const scratch = new Scratch(n);
-    const start = new Map([...cores].map(([m, c]) => [m, 'qmax' in c ? { qmax: c.qmax, k: c.k } : undefined]));
-    boot = bootstrapByGroup(
-      d.group,
-      (idx, len) => {
-        const g = scratch.gather(d, prep, idx, len);
-        const out: number[] = [];
-        for (const m of fitted) {
-          let r: PowerLawCore | MichaelisMentenFit | string;
-          try {
-            r = fitOne(m, g.lx, g.ly, g.dFe, g.feC, g.prep, o, start.get(m));
-          } catch {
-            r = 'failed';
-          }
-          if (typeof r === 'string') out.push(NaN, NaN);
-          else if ('qmax' in r) out.push(r.qmax, r.k);
-          else out.push(r.b, r.a);
-        }
-        return out;
-      },
-      { replicates: o.bootstrap.n, seed: o.bootstrap.seed, level: o.level },
-    );
-  }
+  if (o.bootstrap.n > 0 && fitted.length > 0) boot = bootstrapClass(d, prep, fitted, cores, o);
   const t = tQuantile(1 - (1 - o.level) / 2, n - 2);
   const results: ModelFit[] = [];
   for (const m of models) {
@@ -160,7 +137,6 @@ function fitOne(
   feC: Float64Array,
   p: Prepared,
   o: ResolvedFitOptions,
-  start: { qmax: number; k: number } | undefined,
 ): PowerLawCore | MichaelisMentenFit | string {
   if (m === 'saturating') {
     const logScale = o.saturatingScale === 'log10';
@@ -174,8 +150,6 @@ function fitOne(
       scale: o.saturatingScale,
       weights,
       level: o.level,
-      initial: start,
-      maxIterations: start === undefined ? 100 : 0,
     });
     return f.converged ? f : f.reason;
   }
@@ -246,55 +220,4 @@ function saturatingNotes(scale: 'log10' | 'linear', p: Prepared): string[] {
   ];
   if (p.weights !== undefined) notes.push('weighted by 1/σ² of Fe:C on the fitted scale');
   return notes;
-}
-
-/** Reused gather buffers for bootstrap replicates. */
-class Scratch {
-  private lx: Float64Array;
-  private ly: Float64Array;
-  private dFe: Float64Array;
-  private feC: Float64Array;
-  private w: Float64Array;
-  private sx: Float64Array;
-  private sy: Float64Array;
-
-  constructor(n: number) {
-    this.lx = new Float64Array(n);
-    this.ly = new Float64Array(n);
-    this.dFe = new Float64Array(n);
-    this.feC = new Float64Array(n);
-    this.w = new Float64Array(n);
-    this.sx = new Float64Array(n);
-    this.sy = new Float64Array(n);
-  }
-
-  gather(d: ClassData, p: Prepared, idx: Int32Array, len: number) {
-    if (len > this.lx.length) {
-      const m = Math.max(len, 2 * this.lx.length);
-      this.lx = new Float64Array(m);
-      this.ly = new Float64Array(m);
-      this.dFe = new Float64Array(m);
-      this.feC = new Float64Array(m);
-      this.w = new Float64Array(m);
-      this.sx = new Float64Array(m);
-      this.sy = new Float64Array(m);
-    }
-    for (let k = 0; k < len; k++) {
-      const i = idx[k];
-      this.lx[k] = d.lx[i];
-      this.ly[k] = d.ly[i];
-      this.dFe[k] = d.dFe[i];
-      this.feC[k] = d.feC[i];
-      this.sx[k] = p.sigmaLx[i];
-      if (p.weights !== undefined) this.w[k] = p.weights[i];
-      if (p.sigmaLy !== null) this.sy[k] = p.sigmaLy[i];
-    }
-    const prep: Prepared = {
-      weights: p.weights === undefined ? undefined : this.w.subarray(0, len),
-      sigmaLx: this.sx.subarray(0, len),
-      sigmaLy: p.sigmaLy === null ? null : this.sy.subarray(0, len),
-      notes: [],
-    };
-    return { lx: this.lx.subarray(0, len), ly: this.ly.subarray(0, len), dFe: this.dFe.subarray(0, len), feC: this.feC.subarray(0, len), prep };
-  }
 }

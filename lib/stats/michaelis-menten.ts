@@ -1,6 +1,6 @@
-import { levenbergMarquardt } from 'ml-levenberg-marquardt';
 import { tQuantile } from './distributions.js';
 import type { Interval } from './interval.js';
+import { michaelisMentenLm } from './michaelis-menten-lm.js';
 import {
   atBound,
   badLevel,
@@ -78,7 +78,7 @@ export interface MichaelisMentenFailure {
   reason: string;
 }
 
-/** Nonlinear least squares of y = qmax·x/(k + x) (Levenberg–Marquardt, then Gauss–Newton polishing; standard errors from σ²(JᵀWJ)⁻¹ as in Bates & Watts 1988, Nonlinear Regression Analysis, §2.3). */
+/** Nonlinear least squares of y = qmax·x/(k + x) (Levenberg–Marquardt on typed arrays, then Gauss–Newton polishing; standard errors from σ²(JᵀWJ)⁻¹ as in Bates & Watts 1988, Nonlinear Regression Analysis, §2.3). */
 export function michaelisMenten(
   x: ArrayLike<number>,
   y: ArrayLike<number>,
@@ -119,29 +119,10 @@ export function michaelisMenten(
   };
   const jrow = new Float64Array(2);
   const maxIterations = options.maxIterations ?? 100;
-  let lm: { parameterValues: number[]; iterations: number } = { parameterValues: [q0, k0], iterations: 0 };
-  // maxIterations 0 goes straight to Gauss–Newton: resampling replicates start at the full-data optimum.
-  if (maxIterations > 0) {
-    try {
-      lm = levenbergMarquardt({ x, y: obs }, model, {
-        initialValues: [q0, k0],
-        weights: Array.from(wt, Math.sqrt),
-        maxIterations,
-        // The library stops only when RSS ≤ errorTolerance; 0 lets it use its iterations, the polish decides convergence.
-        errorTolerance: 0,
-        // K must stay positive for the log model to be defined; the bound is far below any physical value.
-        minValues: [Number.MIN_VALUE, Number.MIN_VALUE],
-        jacobianFunction: (p: number[]) => (xi: number) => {
-          jacobian(p[0], p[1], xi, jrow);
-          return [jrow[0], jrow[1]];
-        },
-      });
-    } catch (error) {
-      return fail(nonFiniteFit(what) + ` (${(error as Error).message})`);
-    }
-  }
-  let q = lm.parameterValues[0];
-  let k = lm.parameterValues[1];
+  // maxIterations 0 goes straight to Gauss–Newton, for starts already at the optimum.
+  const lm = michaelisMentenLm(x, obs, wt, scale, q0, k0, maxIterations);
+  let q = lm.qmax;
+  let k = lm.k;
   const rssAt = (qq: number, kk: number): number => {
     const f = model([qq, kk]);
     let s = 0;
