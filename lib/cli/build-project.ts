@@ -88,7 +88,7 @@ export async function buildProject(options: BuildOptions): Promise<BuildOutcome>
     log(`cannot write the site to ${out}: ${error instanceof Error ? error.message : String(error)}`);
     return { code: 3, report, result };
   }
-  for (const line of summaryLines(report, result)) log(line);
+  for (const line of summaryLines(result)) log(line);
   log(`wrote version ${next.version} to ${out}${next.changed ? '' : ' (inputs unchanged)'}`);
   return { code: 0, report, result };
 }

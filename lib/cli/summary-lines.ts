@@ -1,10 +1,9 @@
 // The closing lines of `basinquota build`: per class the primary fit with its interval, and the flagged regions.
 import type { PipelineResult } from '../pipeline/index.js';
-import type { ReportModel } from '../site/index.js';
 import { formatNumber } from '../version/index.js';
 
 /** Lines printed after a successful build. */
-export function summaryLines(report: ReportModel, result: PipelineResult): string[] {
+export function summaryLines(result: PipelineResult): string[] {
   const lines: string[] = [];
   for (const cls of result.fits?.classes ?? []) {
     if (!cls.fitted) {
@@ -19,6 +18,5 @@ export function summaryLines(report: ReportModel, result: PipelineResult): strin
   }
   const flagged = (result.anomalies?.groups ?? []).filter((g) => g.flag === 'lower-than-fit' || g.flag === 'higher-than-fit');
   lines.push(`  flagged region × class groups: ${flagged.length}${flagged.length ? ` (${flagged.map((g) => `${g.region}/${g.phytoClass} ${g.flag}`).join(', ')})` : ''}`);
-  void report;
   return lines;
 }
