@@ -54,7 +54,7 @@ export function readTable(input: InputText, options: ReadTableOptions, ledger: L
     const parsed = parseDelimited(input.text, delimiter, maxLength);
     if ('message' in parsed) return emptyResult(file, parsed.line, 0, parsed.message);
     const { header, records } = parsed;
-    stream = { header, forEach: (visit) => records.forEach((r) => visit(r.fields, r.line)) };
+    stream = { header, size: records.length, forEach: (visit) => records.forEach((r) => visit(r.fields, r.line)) };
   }
   return tableFromStream(file, stream, { ...options, delimiter }, ledger);
 }

@@ -26,6 +26,7 @@ function fromLines(lines: string[], delimiter: string, maxLength: number): Recor
   if (first < 0) return null;
   return {
     header: lines[first].split(delimiter),
+    size: lines.length,
     forEach(visit) {
       for (let i = first + 1; i < lines.length; i++) if (lines[i] !== '') visit(lines[i].split(delimiter), i + 1);
     },
@@ -54,6 +55,7 @@ function fromLineFeeds(body: string, delimiter: string, maxLength: number): Reco
   if (headerStart < 0) return null;
   return {
     header: body.slice(headerStart, headerEnd).split(delimiter),
+    size: line,
     forEach(visit) {
       let at = headerLine;
       for (let start = headerEnd + 1; start <= n; ) {

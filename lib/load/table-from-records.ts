@@ -22,6 +22,8 @@ export interface RecordStream {
   header: string[];
   /** Call `visit` with each data record's fields and physical line, in file order. */
   forEach(visit: (fields: string[], line: number) => void): void;
+  /** At least the number of data records (sizes the numeric columns up front). */
+  size: number;
 }
 
 /** Canonical columns each table needs; `depth|pressure` means either. */
@@ -46,6 +48,7 @@ export function emptyResult(file: string, line: number, col: number, message: st
 export function tableFromRecords(file: string, rawHeader: string[], records: RawRecord[], options: ReadTableOptions, ledger: Ledger): ReadTableResult {
   const stream: RecordStream = {
     header: rawHeader,
+    size: records.length,
     forEach(visit) {
       for (const r of records) visit(r.fields, r.line);
     },
@@ -100,12 +103,13 @@ export function tableFromStream(file: string, records: RecordStream, options: Re
   const out: unknown[][] = names.map(() => []);
   const numberCols = names.map((_, c) => c).filter((c) => kinds[c] !== TEXT);
   const textCols = names.map((_, c) => c).filter((c) => kinds[c] === TEXT);
-  const numberOut = numberCols.map((c) => out[c] as number[]);
+  // Numeric columns are written in place into arrays sized for every record, then cut to the rows kept.
+  const numberOut = numberCols.map(() => new Float64Array(records.size));
   const textOut = textCols.map((c) => out[c] as (string | null)[]);
   const belowOut: boolean[][] = censored.map(() => []);
   const dlOut: number[][] = censored.map(() => []);
-  const dlIsRead = censored.map((q) => index.has(`${q}_dl`));
-  const dlRead = censored.map((q) => (index.has(`${q}_dl`) ? (out[names.indexOf(`${q}_dl`)] as number[]) : null));
+  const dlRead = censored.map((q) => (index.has(`${q}_dl`) ? numberCols.indexOf(names.indexOf(`${q}_dl`)) : -1));
+  let kept = 0;
   const fillCruise = !index.has('cruise') && options.cruise !== undefined;
   const cruiseOut: unknown[] = [];
   const sourceLine: number[] = [];
@@ -166,27 +170,29 @@ export function tableFromStream(file: string, records: RecordStream, options: Re
       }
     }
     // Separate push sites for number and text columns keep each one monomorphic.
-    for (let i = 0; i < numberCols.length; i++) numberOut[i].push(rowNumber[numberCols[i]]);
+    for (let i = 0; i < numberCols.length; i++) numberOut[i][kept] = rowNumber[numberCols[i]];
     for (let i = 0; i < textCols.length; i++) textOut[i].push(rowText[textCols[i]]);
     for (let k = 0; k < nCensored; k++) {
       belowOut[k].push(below[k]);
       const read = dlRead[k];
-      if (read) {
+      if (read >= 0) {
         // A written limit column wins; a limit given in the marker ("<0.05") fills it only where it is empty.
-        const last = read.length - 1;
-        if (below[k] && Number.isNaN(read[last]) && !Number.isNaN(limits[k])) read[last] = limits[k];
+        const column = numberOut[read];
+        if (below[k] && Number.isNaN(column[kept]) && !Number.isNaN(limits[k])) column[kept] = limits[k];
       } else dlOut[k].push(limits[k]);
     }
     if (fillCruise) cruiseOut.push(options.cruise);
     sourceLine.push(line);
+    kept++;
   });
   if (rowsRead === 0) problems.push({ file, line: 1, col: 1, message: msg.headerOnly(), severity: 'warning' });
   // Column order as before: canonical columns, then per censored quantity its flag and (unless read) its limit.
   const columns: Record<string, unknown[]> = {};
   for (let c = 0; c < nCols; c++) columns[names[c]] = out[c];
+  numberCols.forEach((c, i) => (columns[names[c]] = numberOut[i].slice(0, kept) as unknown as unknown[]));
   for (let k = 0; k < nCensored; k++) {
     columns[`${censored[k]}_below_dl`] = belowOut[k];
-    if (!dlIsRead[k]) columns[`${censored[k]}_dl`] = dlOut[k];
+    if (dlRead[k] < 0) columns[`${censored[k]}_dl`] = dlOut[k];
   }
   if (fillCruise) columns.cruise = cruiseOut;
   columns.source_file = new Array(sourceLine.length).fill(file);
