@@ -5,6 +5,7 @@ import { buildReportModel, buildResults, buildSnapshot, type ReportModel } from 
 import { buildManifest, diffSnapshots, firstVersionChanges, nextVersion, prettyJson } from '../version/index.js';
 import { ArchiveError, archivedSiteFiles, readArchive, writeArchiveVersion } from './archive.js';
 import { buildDate } from './build-date.js';
+import { projectCache } from './cache/index.js';
 import { formatProblem } from './format-problem.js';
 import { packageVersion } from './package-info.js';
 import { progressPrinter } from './progress-printer.js';
@@ -23,6 +24,8 @@ export interface BuildOptions {
   out?: string;
   /** Where messages go (stderr by default). */
   log?: (line: string) => void;
+  /** Reuse per-file results from DIR/.basinquota-cache and update it; default true. */
+  cache?: boolean;
 }
 
 /** Result of a build: the exit code, and the model and pipeline result when it got that far. */
@@ -46,7 +49,9 @@ export async function buildProject(options: BuildOptions): Promise<BuildOutcome>
   for (const p of columnarProblems) log(formatProblem(p));
   if (hasErrors(columnarProblems)) return { code: 1 };
   log(`basinquota build ${project.dir}`);
-  const result = runPipeline(inputs, progressPrinter(log));
+  const cache = options.cache === false ? undefined : projectCache(project.dir, { packageVersion: packageVersion() });
+  const result = runPipeline(inputs, progressPrinter(log), cache);
+  cache?.prune();
   for (const p of result.problems) log(formatProblem(p));
   if (hasErrors(result.problems)) return { code: 1, result };
 

@@ -6,7 +6,9 @@ import { Ledger } from '../ledger/index.js';
 import { crossoverOffsets, matchCells, type CruiseOffset, type StationPairDifference } from '../match/index.js';
 import { computeQuotas } from '../quotas/index.js';
 import type { Problem } from '../types.js';
+import { harmoniseLoaded } from './harmonise-loaded.js';
 import { harmoniseTables } from './harmonise-tables.js';
+import type { InputCache } from './input-cache.js';
 import { concatTables, loadTables, type FileCount } from './load-tables.js';
 import type { ProjectInputs } from './project-inputs.js';
 import { silentProgress, type Progress } from './progress.js';
@@ -44,8 +46,8 @@ export interface PipelineResult {
   anomalies: AnomalyResults | null;
 }
 
-/** Run every stage on in-memory inputs. */
-export function runPipeline(inputs: ProjectInputs, progress: Progress = silentProgress): PipelineResult {
+/** Run every stage on in-memory inputs; with a cache, table files whose key hits skip load and harmonise (same results). */
+export function runPipeline(inputs: ProjectInputs, progress: Progress = silentProgress, cache?: InputCache): PipelineResult {
   const { config } = inputs;
   const ledger = new Ledger();
   const knownFiles = [...inputs.files.keys()];
@@ -68,7 +70,7 @@ export function runPipeline(inputs: ProjectInputs, progress: Progress = silentPr
   };
 
   progress.start('load');
-  const loaded = loadTables(config, inputs.files, ledger, inputs.columnar);
+  const loaded = loadTables(config, inputs.files, ledger, inputs.columnar, cache);
   result.counts = loaded.counts;
   result.problems.push(...loaded.problems);
   const rowsRead = loaded.counts.reduce((s, c) => s + c.rowsRead, 0);
@@ -83,7 +85,7 @@ export function runPipeline(inputs: ProjectInputs, progress: Progress = silentPr
 
   progress.start('harmonise');
   try {
-    const harmonised = harmoniseTables(config, loaded.samples, loaded.cells, ledger);
+    const harmonised = cache ? harmoniseLoaded(config, loaded, ledger, cache) : harmoniseTables(config, loaded.samples, loaded.cells, ledger);
     result.harmonise = harmonised.summaries;
     result.samples = concatTables(harmonised.samples);
     result.cells = concatTables(harmonised.cells);

@@ -1,0 +1,3 @@
+export { projectCache, CACHE_DIR, type ProjectCache, type ProjectCacheOptions, type CacheStats } from './project-cache.js';
+export { tableCacheKey, CACHE_FORMAT_VERSION } from './cache-key.js';
+export { encodeTable, decodeTable, type EncodedTable, type TableHeader, type ColumnHeader } from './table-codec.js';
