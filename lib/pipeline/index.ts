@@ -5,4 +5,4 @@ export type { ProjectInputs } from './project-inputs.js';
 export { silentProgress, type Progress } from './progress.js';
 export { concatTables, loadTables, type FileCount, type LoadedTables } from './load-tables.js';
 export { decodeColumnarInputs } from './decode-columnar-inputs.js';
-export type { InputCache, CachedTableFile, TableCacheKey } from './input-cache.js';
+export type { InputCache, CachedTableFile, TableCacheKey, CachedGrid, GridCacheKey } from './input-cache.js';

@@ -2,7 +2,7 @@
 import type * as aq from 'arquero';
 import type { HarmoniseSummary } from '../harmonise/index.js';
 import type { TableName } from '../load/index.js';
-import type { LedgerEntry, Problem } from '../types.js';
+import type { Grid, LedgerEntry, Problem } from '../types.js';
 
 /** What identifies one table file's load + harmonise result: everything that result depends on. */
 export interface TableCacheKey {
@@ -36,10 +36,34 @@ export interface CachedTableFile {
   summary: HarmoniseSummary;
 }
 
+/** What identifies one grid file's result: its bytes, its config entry and the density used for per-volume units. */
+export interface GridCacheKey {
+  /** File path as in the config. */
+  path: string;
+  /** The file's bytes. */
+  bytes: Uint8Array;
+  /** The grid's config entry (quantity, variable, units, …). */
+  entry: unknown;
+  /** The config's harmonise.default_density (per-volume grid units are converted with it). */
+  density: number;
+}
+
+/** One grid file's result: the grid in canonical units and the ledger rows reading it wrote. */
+export interface CachedGrid {
+  /** The grid. */
+  grid: Grid;
+  /** Ledger rows written while reading it, in order. */
+  ledger: LedgerEntry[];
+}
+
 /** A store of per-file results; `get` returns undefined on a miss or an unreadable entry and must never throw. */
 export interface InputCache {
   /** The cached result for this key, if any. */
   getTable(key: TableCacheKey): CachedTableFile | undefined;
   /** Remember a result for this key. */
   putTable(key: TableCacheKey, value: CachedTableFile): void;
+  /** The cached grid for this key, if any. */
+  getGrid(key: GridCacheKey): CachedGrid | undefined;
+  /** Remember a grid for this key. */
+  putGrid(key: GridCacheKey, value: CachedGrid): void;
 }

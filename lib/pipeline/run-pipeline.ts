@@ -13,6 +13,7 @@ import { concatTables, loadTables, type FileCount } from './load-tables.js';
 import type { ProjectInputs } from './project-inputs.js';
 import { silentProgress, type Progress } from './progress.js';
 import { readGrids, type QuantityGrid } from './read-grids.js';
+import { readGridsCached } from './read-grids-cached.js';
 import { stageProblem } from './stage-problem.js';
 import { crossoverOptions, fitOptions, matchOptions, quotaOptions } from './stage-options.js';
 import { withColumn } from './with-column.js';
@@ -75,7 +76,7 @@ export function runPipeline(inputs: ProjectInputs, progress: Progress = silentPr
   result.problems.push(...loaded.problems);
   const rowsRead = loaded.counts.reduce((s, c) => s + c.rowsRead, 0);
   const rowsLoaded = [...loaded.samples, ...loaded.cells].reduce((s, t) => s + t.numRows(), 0);
-  const gridsRead = readGrids(config, inputs.files, ledger);
+  const gridsRead = cache ? readGridsCached(config, inputs.files, ledger, cache) : readGrids(config, inputs.files, ledger);
   result.grids = gridsRead.grids;
   result.problems.push(...gridsRead.problems);
   progress.end('load', rowsRead, rowsLoaded);

@@ -1,6 +1,6 @@
 import * as aq from 'arquero';
 import { describe, expect, it } from 'vitest';
-import { decodeTable, encodeTable } from '../../lib/cli/cache/index.js';
+import { decodeGrid, decodeTable, encodeGrid, encodeTable } from '../../lib/cli/cache/index.js';
 
 const roundTrip = (table: aq.ColumnTable): aq.ColumnTable => {
   const { header, chunks } = encodeTable(table, 0);
@@ -47,5 +47,32 @@ describe('encodeTable / decodeTable', () => {
   it('decodeTable(header pointing outside the bytes) throws instead of reading garbage', () => {
     const { header } = encodeTable(aq.table({ x: [1, 2] }), 0);
     expect(() => decodeTable(header, new Uint8Array(4))).toThrow(/outside/);
+  });
+});
+
+describe('encodeGrid / decodeGrid', () => {
+  it('decodeGrid(encodeGrid(grid)) gives back every axis, value (NaN included) and field', () => {
+    const grid = {
+      quantity: 'dissolved_fe',
+      units: 'nmol/kg',
+      lon: Float64Array.from([-10, 0, 10]),
+      lat: Float64Array.from([-5, 5]),
+      depth: Float64Array.from([0]),
+      timeKind: 'none' as const,
+      time: Float64Array.from([0]),
+      values: Float32Array.from([0.1, NaN, 0.3, 0.4, 0.5, 0.6]),
+      periodicLon: false,
+      source: 'dfe.nc',
+      variable: 'dfe',
+    };
+    const { header, chunks } = encodeGrid(grid, 0);
+    const blob = new Uint8Array(chunks.reduce((s, c) => s + c.length, 0));
+    let at = 0;
+    for (const c of chunks) {
+      blob.set(c, at);
+      at += c.length;
+    }
+    expect(decodeGrid(header, blob)).toEqual(grid);
+    expect(() => decodeGrid(header, blob.subarray(0, 40))).toThrow(/outside/);
   });
 });

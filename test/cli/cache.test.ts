@@ -1,4 +1,4 @@
-import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { copyFileSync, existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { parse, stringify } from 'yaml';
@@ -21,6 +21,8 @@ function twoCruiseProject(): string {
     const entry = config.inputs[table][0];
     config.inputs[table] = [{ ...entry, path: `${table}-a.csv` }, { ...entry, path: `${table}-b.csv` }];
   }
+  copyFileSync(join('test', 'fixtures', 'grids', 'climatology.nc'), join(dir, 'dfe.nc'));
+  (config.inputs as Record<string, unknown>).grids = [{ path: 'dfe.nc', quantity: 'dissolved_fe', variable: 'dfe' }];
   writeFileSync(join(dir, 'basinquota.yaml'), stringify(config));
   return dir;
 }
@@ -39,6 +41,7 @@ const view = (r: PipelineResult) => ({
   counts: r.counts,
   problems: r.problems,
   harmonise: r.harmonise,
+  grids: r.grids,
   fits: r.fits,
   anomalies: r.anomalies,
 });
@@ -53,11 +56,14 @@ describe('projectCache(dir) with runPipeline', () => {
     const dir = withTempCopy(base);
     const cold = projectCache(dir, { packageVersion: '1.0.0' });
     const first = run(dir, cold);
-    expect(cold.stats).toEqual({ hits: 0, misses: 4, rejected: 0, writes: 4 });
+    expect(cold.stats).toEqual({ hits: 0, misses: 5, rejected: 0, writes: 5 });
     const warm = projectCache(dir, { packageVersion: '1.0.0' });
     const second = run(dir, warm);
-    expect(warm.stats).toEqual({ hits: 4, misses: 0, rejected: 0, writes: 0 });
+    expect(warm.stats).toEqual({ hits: 5, misses: 0, rejected: 0, writes: 0 });
     const plain = view(run(dir));
+    expect(first.grids).toHaveLength(1);
+    expect(first.problems.filter((p) => p.severity === 'error')).toEqual([]);
+    expect(first.fits).not.toBeNull();
     expect(view(first)).toEqual(plain);
     expect(view(second)).toEqual(plain);
     expect(readFileSync(join(dir, CACHE_DIR, '.gitignore'), 'utf8')).toBe('*\n');
@@ -71,7 +77,20 @@ describe('projectCache(dir) with runPipeline', () => {
     writeFileSync(path, `${lines.slice(0, -1).join('\n')}\n`);
     const cache = projectCache(dir, { packageVersion: '1.0.0' });
     const result = run(dir, cache);
-    expect(cache.stats).toEqual({ hits: 3, misses: 1, rejected: 0, writes: 1 });
+    expect(cache.stats).toEqual({ hits: 4, misses: 1, rejected: 0, writes: 1 });
+    expect(view(result)).toEqual(view(run(dir)));
+  });
+
+  it('runPipeline(grid file changed, cache) re-reads only the grid', () => {
+    const dir = withTempCopy(base);
+    run(dir, projectCache(dir, { packageVersion: '1.0.0' }));
+    copyFileSync(join('test', 'fixtures', 'grids', 'packed.nc'), join(dir, 'dfe.nc'));
+    const cache = projectCache(dir, { packageVersion: '1.0.0' });
+    const result = run(dir, cache);
+    expect(cache.stats.misses).toBe(1);
+    expect(cache.stats.hits).toBe(4);
+    expect(result.grids).toHaveLength(1);
+    expect(result.problems.filter((p) => p.severity === 'error')).toEqual([]);
     expect(view(result)).toEqual(view(run(dir)));
   });
 
@@ -83,7 +102,7 @@ describe('projectCache(dir) with runPipeline', () => {
     writeFileSync(configPath, stringify({ ...config, harmonise: { default_density: 1030 } }));
     const cache = projectCache(dir, { packageVersion: '1.0.0' });
     const result = run(dir, cache);
-    expect(cache.stats).toEqual({ hits: 0, misses: 4, rejected: 0, writes: 4 });
+    expect(cache.stats).toEqual({ hits: 0, misses: 5, rejected: 0, writes: 5 });
     expect(view(result)).toEqual(view(run(dir)));
   });
 
@@ -96,7 +115,7 @@ describe('projectCache(dir) with runPipeline', () => {
     writeFileSync(configPath, stringify(config));
     const cache = projectCache(dir, { packageVersion: '1.0.0' });
     run(dir, cache);
-    expect(cache.stats).toEqual({ hits: 3, misses: 1, rejected: 0, writes: 1 });
+    expect(cache.stats).toEqual({ hits: 4, misses: 1, rejected: 0, writes: 1 });
   });
 
   it('runPipeline(other package version, cache) misses every file', () => {
@@ -104,14 +123,14 @@ describe('projectCache(dir) with runPipeline', () => {
     run(dir, projectCache(dir, { packageVersion: '1.0.0' }));
     const cache = projectCache(dir, { packageVersion: '1.0.1' });
     run(dir, cache);
-    expect(cache.stats).toEqual({ hits: 0, misses: 4, rejected: 0, writes: 4 });
+    expect(cache.stats).toEqual({ hits: 0, misses: 5, rejected: 0, writes: 5 });
   });
 
   it('runPipeline(corrupt and truncated entries, cache) ignores them, rebuilds the same result and rewrites them', () => {
     const dir = withTempCopy(base);
     run(dir, projectCache(dir, { packageVersion: '1.0.0' }));
     const entries = readdirSync(join(dir, CACHE_DIR)).filter((f) => f.endsWith('.bin')).map((f) => join(dir, CACHE_DIR, f));
-    expect(entries).toHaveLength(4);
+    expect(entries).toHaveLength(5);
     const flipped = readFileSync(entries[0]);
     flipped[flipped.length - 3] ^= 0xff;
     writeFileSync(entries[0], flipped);
@@ -119,11 +138,11 @@ describe('projectCache(dir) with runPipeline', () => {
     writeFileSync(entries[2], 'not a cache entry');
     const cache = projectCache(dir, { packageVersion: '1.0.0' });
     const result = run(dir, cache);
-    expect(cache.stats).toEqual({ hits: 1, misses: 0, rejected: 3, writes: 3 });
+    expect(cache.stats).toEqual({ hits: 2, misses: 0, rejected: 3, writes: 3 });
     expect(view(result)).toEqual(view(run(dir)));
     const again = projectCache(dir, { packageVersion: '1.0.0' });
     run(dir, again);
-    expect(again.stats.hits).toBe(4);
+    expect(again.stats.hits).toBe(5);
   });
 
   it('prune() removes the entries of inputs no longer in use', () => {
@@ -132,7 +151,7 @@ describe('projectCache(dir) with runPipeline', () => {
     const cache = projectCache(dir, { packageVersion: '2.0.0' });
     run(dir, cache);
     cache.prune();
-    expect(readdirSync(join(dir, CACHE_DIR)).filter((f) => f.endsWith('.bin'))).toHaveLength(4);
+    expect(readdirSync(join(dir, CACHE_DIR)).filter((f) => f.endsWith('.bin'))).toHaveLength(5);
     expect(existsSync(join(dir, CACHE_DIR, '.gitignore'))).toBe(true);
   });
 });

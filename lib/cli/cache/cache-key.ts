@@ -1,6 +1,6 @@
 // The content hash that names a cache entry.
 import { createHash } from 'node:crypto';
-import type { TableCacheKey } from '../../pipeline/index.js';
+import type { GridCacheKey, TableCacheKey } from '../../pipeline/index.js';
 
 /** Version of the entry layout; bump it when the stored format or what is stored changes. */
 export const CACHE_FORMAT_VERSION = 1;
@@ -14,6 +14,15 @@ export function tableCacheKey(key: TableCacheKey, packageVersion: string): strin
   const hash = createHash('sha256');
   const text = JSON.stringify(['basinquota-cache', CACHE_FORMAT_VERSION, packageVersion, 'table', key.table, key.path, key.entry, key.harmonise, key.bytes.length]);
   hash.update(text);
+  hash.update('\u0000');
+  hash.update(key.bytes);
+  return hash.digest('hex');
+}
+
+/** SHA-256 (hex) naming a grid entry: format and basinquota versions, the path, the JSON of the grid's config entry, the default density, and the file's bytes. */
+export function gridCacheKey(key: GridCacheKey, packageVersion: string): string {
+  const hash = createHash('sha256');
+  hash.update(JSON.stringify(['basinquota-cache', CACHE_FORMAT_VERSION, packageVersion, 'grid', key.path, key.entry, key.density, key.bytes.length]));
   hash.update('\u0000');
   hash.update(key.bytes);
   return hash.digest('hex');

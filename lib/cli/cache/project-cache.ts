@@ -2,8 +2,9 @@
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { CachedTableFile, InputCache, TableCacheKey } from '../../pipeline/index.js';
-import { CACHE_FORMAT_VERSION, tableCacheKey } from './cache-key.js';
+import type { CachedGrid, CachedTableFile, GridCacheKey, InputCache, TableCacheKey } from '../../pipeline/index.js';
+import { CACHE_FORMAT_VERSION, gridCacheKey, tableCacheKey } from './cache-key.js';
+import { decodeGrid, encodeGrid, type GridHeader } from './grid-codec.js';
 import { decodeTable, encodeTable, type TableHeader } from './table-codec.js';
 
 /** Folder name of the cache inside a project. */
@@ -37,10 +38,8 @@ export interface ProjectCacheOptions {
   packageVersion: string;
 }
 
-/** Header stored before the blob of one entry. */
-interface EntryHeader {
-  format: number;
-  key: string;
+/** What a table entry's header holds besides format and key. */
+interface TableEntryHeader {
   rowsRead: number;
   problems: CachedTableFile['problems'];
   loadLedger: CachedTableFile['loadLedger'];
@@ -50,51 +49,69 @@ interface EntryHeader {
   harmonised: TableHeader;
 }
 
+/** What a grid entry's header holds besides format and key. */
+interface GridEntryHeader {
+  grid: GridHeader;
+  ledger: CachedGrid['ledger'];
+}
+
 /**
- * A cache in `<project>/.basinquota-cache/` (with a `.gitignore` of `*`): one file per table input, named by
- * tableCacheKey. An entry is "BQC\x01", the SHA-256 of the rest, a 4-byte header length, the JSON header and the
- * column bytes; any entry that fails these checks is treated as a miss. Failing to write is never an error.
+ * A cache in `<project>/.basinquota-cache/` (with a `.gitignore` of `*`): one file per table or grid input, named
+ * by tableCacheKey or gridCacheKey. An entry is "BQC\x01", the SHA-256 of the rest, a 4-byte header length, the
+ * JSON header and the array bytes; an entry that fails these checks is a miss. Failing to write is never an error.
  */
 export function projectCache(projectDir: string, options: ProjectCacheOptions): ProjectCache {
   const dir = join(projectDir, CACHE_DIR);
   const stats: CacheStats = { hits: 0, misses: 0, rejected: 0, writes: 0 };
   const used = new Set<string>();
   const pathOf = (name: string) => join(dir, `${name}.bin`);
+  const get = <T>(name: string, decode: (header: unknown, blob: Uint8Array) => T): T | undefined => {
+    used.add(name);
+    let bytes: Uint8Array;
+    try {
+      bytes = readFileSync(pathOf(name));
+    } catch {
+      stats.misses++;
+      return undefined;
+    }
+    try {
+      const { header, blob } = readEntry(bytes, name);
+      const value = decode(header, blob);
+      stats.hits++;
+      return value;
+    } catch {
+      stats.rejected++;
+      return undefined;
+    }
+  };
+  const put = (name: string, encode: () => { header: object; chunks: Uint8Array[] }): void => {
+    used.add(name);
+    try {
+      const { header, chunks } = encode();
+      const bytes = writeEntry({ format: CACHE_FORMAT_VERSION, key: name, ...header }, chunks);
+      ensureDir(dir);
+      const tmp = join(dir, `${name}.${process.pid}.tmp`);
+      writeFileSync(tmp, bytes);
+      renameSync(tmp, pathOf(name));
+      stats.writes++;
+    } catch {
+      // An unwritable cache or an uncacheable value only costs the next build its speed.
+    }
+  };
   return {
     stats,
-    getTable(key: TableCacheKey): CachedTableFile | undefined {
-      const name = tableCacheKey(key, options.packageVersion);
-      used.add(name);
-      let bytes: Uint8Array;
-      try {
-        bytes = readFileSync(pathOf(name));
-      } catch {
-        stats.misses++;
-        return undefined;
-      }
-      try {
-        const value = readEntry(bytes, name);
-        stats.hits++;
-        return value;
-      } catch {
-        stats.rejected++;
-        return undefined;
-      }
-    },
-    putTable(key: TableCacheKey, value: CachedTableFile): void {
-      const name = tableCacheKey(key, options.packageVersion);
-      used.add(name);
-      try {
-        const bytes = writeEntry(value, name);
-        ensureDir(dir);
-        const tmp = join(dir, `${name}.${process.pid}.tmp`);
-        writeFileSync(tmp, bytes);
-        renameSync(tmp, pathOf(name));
-        stats.writes++;
-      } catch {
-        // An unwritable cache or an uncacheable table only costs the next build its speed.
-      }
-    },
+    getTable: (key: TableCacheKey) => get(tableCacheKey(key, options.packageVersion), (header, blob) => tableFromEntry(header as TableEntryHeader, blob)),
+    putTable: (key: TableCacheKey, value: CachedTableFile) => put(tableCacheKey(key, options.packageVersion), () => tableToEntry(value)),
+    getGrid: (key: GridCacheKey) =>
+      get(gridCacheKey(key, options.packageVersion), (header, blob) => {
+        const h = header as GridEntryHeader;
+        return { grid: decodeGrid(h.grid, blob), ledger: h.ledger };
+      }),
+    putGrid: (key: GridCacheKey, value: CachedGrid) =>
+      put(gridCacheKey(key, options.packageVersion), () => {
+        const { header, chunks } = encodeGrid(value.grid, 0);
+        return { header: { grid: header, ledger: value.ledger }, chunks };
+      }),
     prune(): void {
       if (!existsSync(dir)) return;
       for (const f of readdirSync(dir)) {
@@ -111,49 +128,44 @@ function ensureDir(dir: string): void {
   if (!existsSync(ignore)) writeFileSync(ignore, '*\n');
 }
 
-function writeEntry(value: CachedTableFile, key: string): Uint8Array {
+function tableToEntry(value: CachedTableFile): { header: TableEntryHeader; chunks: Uint8Array[] } {
   const loaded = encodeTable(value.loaded, 0);
-  const loadedLength = loaded.chunks.reduce((s, c) => s + c.length, 0);
-  const harmonised = encodeTable(value.harmonised, loadedLength);
-  const header: EntryHeader = {
-    format: CACHE_FORMAT_VERSION,
-    key,
-    rowsRead: value.rowsRead,
-    problems: value.problems,
-    loadLedger: value.loadLedger,
-    harmoniseLedger: value.harmoniseLedger,
-    summary: value.summary,
-    loaded: loaded.header,
-    harmonised: harmonised.header,
+  const harmonised = encodeTable(value.harmonised, loaded.chunks.reduce((s, c) => s + c.length, 0));
+  const { rowsRead, problems, loadLedger, harmoniseLedger, summary } = value;
+  return { header: { rowsRead, problems, loadLedger, harmoniseLedger, summary, loaded: loaded.header, harmonised: harmonised.header }, chunks: [...loaded.chunks, ...harmonised.chunks] };
+}
+
+function tableFromEntry(h: TableEntryHeader, blob: Uint8Array): CachedTableFile {
+  return {
+    loaded: decodeTable(h.loaded, blob),
+    loadLedger: h.loadLedger,
+    rowsRead: h.rowsRead,
+    problems: h.problems,
+    harmonised: decodeTable(h.harmonised, blob),
+    harmoniseLedger: h.harmoniseLedger,
+    summary: h.summary,
   };
+}
+
+/** An entry: magic, SHA-256 of the rest, header length, JSON header, then the blob (8-byte aligned within itself). */
+function writeEntry(header: object, chunks: Uint8Array[]): Uint8Array {
   const headerBytes = new TextEncoder().encode(JSON.stringify(header));
-  const parts = [new Uint8Array(new Uint32Array([headerBytes.length]).buffer), headerBytes, ...loaded.chunks, ...harmonised.chunks];
-  const body = concat(parts);
+  const body = concat([new Uint8Array(new Uint32Array([headerBytes.length]).buffer), headerBytes, ...chunks]);
   const digest = createHash('sha256').update(body).digest();
   return concat([new TextEncoder().encode(MAGIC), digest, body]);
 }
 
-function readEntry(bytes: Uint8Array, key: string): CachedTableFile {
+function readEntry(bytes: Uint8Array, key: string): { header: unknown; blob: Uint8Array } {
   const magic = new TextEncoder().encode(MAGIC);
   if (bytes.length < magic.length + 36 || magic.some((b, i) => bytes[i] !== b)) throw new Error('not a cache entry');
   const digest = bytes.subarray(magic.length, magic.length + 32);
   const body = bytes.subarray(magic.length + 32);
-  const actual = createHash('sha256').update(body).digest();
-  if (!actual.equals(digest)) throw new Error('checksum mismatch');
+  if (!createHash('sha256').update(body).digest().equals(digest)) throw new Error('checksum mismatch');
   const headerLength = new DataView(body.buffer, body.byteOffset, 4).getUint32(0, true);
   if (4 + headerLength > body.length) throw new Error('truncated header');
-  const header = JSON.parse(new TextDecoder().decode(body.subarray(4, 4 + headerLength))) as EntryHeader;
+  const header = JSON.parse(new TextDecoder().decode(body.subarray(4, 4 + headerLength))) as { format?: number; key?: string };
   if (header.format !== CACHE_FORMAT_VERSION || header.key !== key) throw new Error('other format or key');
-  const blob = body.subarray(4 + headerLength);
-  return {
-    loaded: decodeTable(header.loaded, blob),
-    loadLedger: header.loadLedger,
-    rowsRead: header.rowsRead,
-    problems: header.problems,
-    harmonised: decodeTable(header.harmonised, blob),
-    harmoniseLedger: header.harmoniseLedger,
-    summary: header.summary,
-  };
+  return { header, blob: body.subarray(4 + headerLength) };
 }
 
 function concat(parts: Uint8Array[]): Uint8Array {
