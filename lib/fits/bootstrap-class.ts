@@ -4,7 +4,8 @@ import {
   groupRows,
   lineOnCounts,
   michaelisMentenOnCounts,
-  yorkOnCounts,
+  yorkBlocks,
+  yorkOnBlocks,
   type GroupRows,
   type Interval,
   type MichaelisMentenFit,
@@ -52,16 +53,16 @@ export function bootstrapClass(
     } else if (m === 'york') {
       const sx = p.sigmaLx;
       const sy = p.sigmaLy as Float64Array;
-      const data = {
+      const data = yorkBlocks({
         start: index.start,
         x: byStation(d.lx),
         y: byStation(d.ly),
         vx: Float64Array.from(index.rows, (i) => sx[i] * sx[i]),
         vy: Float64Array.from(index.rows, (i) => sy[i] * sy[i]),
-      };
+      });
       const startSlope = (core as PowerLawCore).b;
       kernels.push((counts, out, at) => {
-        const f = yorkOnCounts(data, counts, { startSlope });
+        const f = yorkOnBlocks(data, counts, { startSlope });
         out[at] = f.slope;
         out[at + 1] = f.intercept;
       });
