@@ -3,7 +3,8 @@ import {
   groupLineSums,
   groupRows,
   lineOnCounts,
-  michaelisMentenOnCounts,
+  michaelisMentenOnMoments,
+  saturatingMoments,
   yorkBlocks,
   yorkOnBlocks,
   type GroupRows,
@@ -75,8 +76,9 @@ export function bootstrapClass(
       );
       const obs = Float64Array.from(d.ly, (v, i) => (log ? v - d.lx[i] : d.feC[i]));
       const data = { ...mergeEqualX(index, d.dFe, obs, w), scale: o.saturatingScale };
+      const moments = saturatingMoments(data, mm.k);
       kernels.push((counts, out, at) => {
-        const f = michaelisMentenOnCounts(data, counts, { qmax: mm.qmax, k: mm.k });
+        const f = michaelisMentenOnMoments(data, moments, counts, { qmax: mm.qmax, k: mm.k });
         out[at] = f.qmax;
         out[at + 1] = f.k;
       });
