@@ -3,6 +3,7 @@ import type { Ledger } from '../ledger/index.js';
 import { CELL_COLUMNS, ELEMENTS } from '../load/canonical.js';
 import { numberColumn, sourceLines, textColumn } from './columns.js';
 import { isIdentity, requireStatedUnits, resolveConversions } from './conversions.js';
+import { keptTable } from './keptTable.js';
 import { replaceFillValues } from './fillValues.js';
 import { duplicateCellId } from './messages.js';
 import { DEFAULT_FILL_VALUES, type CellHarmoniseOptions } from './options.js';
@@ -77,16 +78,8 @@ export function harmoniseCells(table: aq.ColumnTable, options: CellHarmoniseOpti
     counts.push({ column: c, from: conv.from, to: conv.to, method: conv.viaMolarMass ? 'molar-mass' : 'factor', rows: converted });
   }
 
-  const out: Record<string, unknown[]> = {};
-  for (const c of names) {
-    if (num[c]) out[c] = kept.map((i) => num[c][i]);
-    else {
-      const src = table.array(c);
-      out[c] = kept.map((i) => src[i]);
-    }
-  }
   return {
-    table: aq.table(out),
+    table: keptTable(table, names, num, kept),
     summary: {
       table: tableName,
       file,

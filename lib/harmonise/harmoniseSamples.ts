@@ -5,6 +5,7 @@ import type { QualityFlag } from '../types.js';
 import { depthFromPressure, pressureFromDepth, seawaterDensity, t68FromT90 } from '../units/index.js';
 import { booleanColumn, numberColumn, sourceLines, textColumn } from './columns.js';
 import { isIdentity, requireStatedUnits, resolveConversions } from './conversions.js';
+import { keptTable } from './keptTable.js';
 import { replaceFillValues } from './fillValues.js';
 import { defaultDensity, depthPressureMismatch, duplicateBottle } from './messages.js';
 import { DEFAULT_DENSITY, DEFAULT_FILL_VALUES, type SampleHarmoniseOptions } from './options.js';
@@ -153,18 +154,9 @@ export function harmoniseSamples(table: aq.ColumnTable, options: SampleHarmonise
   }
   counts.push({ column: 'depth', from: 'dbar', to: 'm', method: 'depth-from-pressure', rows: depthFromP });
 
-  const out: Record<string, unknown[]> = {};
   const order = [...names, ...Object.keys(num).filter((c) => !names.includes(c)), ...Object.keys(extra)];
-  for (const c of order) {
-    if (num[c]) out[c] = kept.map((i) => num[c][i]);
-    else if (extra[c]) out[c] = kept.map((i) => extra[c][i]);
-    else {
-      const src = table.array(c);
-      out[c] = kept.map((i) => src[i]);
-    }
-  }
   return {
-    table: aq.table(out),
+    table: keptTable(table, order, { ...extra, ...num }, kept),
     summary: {
       table: tableName,
       file,

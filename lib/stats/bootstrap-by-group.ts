@@ -1,7 +1,8 @@
-import { quantileSorted } from 'd3-array';
 import { randomLcg } from 'd3-random';
 import type { Interval } from './interval.js';
-import { badGroupIndex, badLevel } from './messages.js';
+import { groupRows } from './group-rows.js';
+import { percentileIntervals } from './percentile-intervals.js';
+import { badLevel } from './messages.js';
 
 /** A statistic over the rows idx[0..len) of the caller's data; returns one or more numbers (NaN = failed replicate). */
 export type GroupStatistic = (idx: Int32Array, len: number) => ArrayLike<number>;
@@ -45,21 +46,8 @@ export function bootstrapByGroup(
   const level = options.level ?? 0.95;
   if (!(level > 0 && level < 1)) throw new RangeError(badLevel(level));
   const n = group.length;
-  let g = 0;
-  for (let i = 0; i < n; i++) {
-    if (!(group[i] >= 0)) throw new RangeError(badGroupIndex(i, group[i]));
-    if (group[i] + 1 > g) g = group[i] + 1;
-  }
-  // Rows of each group, contiguous (CSR), so a drawn group is one block copy.
-  const start = new Int32Array(g + 1);
-  for (let i = 0; i < n; i++) start[group[i] + 1]++;
-  for (let j = 0; j < g; j++) start[j + 1] += start[j];
-  const rows = new Int32Array(n);
-  const fill = start.slice(0, g);
-  for (let i = 0; i < n; i++) rows[fill[group[i]]++] = i;
-  // Groups with no rows (gaps in the numbering) are not drawn.
-  const present: number[] = [];
-  for (let j = 0; j < g; j++) if (start[j + 1] > start[j]) present.push(j);
+  // Rows of each group, contiguous (CSR), so a drawn group is one block copy; groups with no rows are not drawn.
+  const { start, rows, present } = groupRows(group);
   const groups = present.length;
 
   const all = new Int32Array(n);
@@ -87,18 +75,7 @@ export function bootstrapByGroup(
     const v = statistic(idx, len);
     for (let c = 0; c < m; c++) values[c][r] = v[c];
   }
-  const alpha = 1 - level;
-  const failed: number[] = [];
-  const intervals: Interval[] = [];
-  for (let c = 0; c < m; c++) {
-    const finite = Array.from(values[c].filter(Number.isFinite).sort());
-    failed.push(b - finite.length);
-    intervals.push(
-      finite.length > 0
-        ? { lower: quantileSorted(finite, alpha / 2) as number, upper: quantileSorted(finite, 1 - alpha / 2) as number }
-        : { lower: NaN, upper: NaN },
-    );
-  }
+  const { failed, intervals } = percentileIntervals(values, level);
   return {
     replicates: b,
     seed: options.seed,

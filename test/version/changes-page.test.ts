@@ -3,21 +3,9 @@ import { render, data } from '../../content/changes.11ty.js';
 import type { ReportModel } from '../../lib/site/report-model.js';
 import { diffSnapshots, firstVersionChanges } from '../../lib/version/index.js';
 import { snapshotV1, snapshotV2 } from './snapshots.js';
+import { reportStub } from '../helpers/report-stub.js';
 
-const report = (changes: unknown): ReportModel => ({
-  meta: { title: 'Test <report>', authors: ['A. Author'], programme: null, licence: 'CC-BY-4.0', contact: null, version: 2, date: '2024-06-01', toolVersion: '0.1.0' },
-  counts: { cruises: 0, stations: 0, samples: 0, cells: 0, cellsByClass: [] },
-  inventory: [],
-  files: [],
-  ledger: [],
-  findings: [],
-  conversions: [],
-  matchSources: [],
-  crossover: [],
-  crossoverSettings: { maxDistanceKm: 200, minDepthM: 1000, thresholdNmolKg: 0.1 },
-  pages: ['index.html', 'changes.html'],
-  sections: changes === undefined ? {} : { changes },
-});
+const report = (changes: unknown): ReportModel => reportStub('changes.html', 'changes', changes, { title: 'Test <report>', version: 2 });
 
 describe('content/changes.11ty.ts', () => {
   it('data.permalink is changes.html', () => {

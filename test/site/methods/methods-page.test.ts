@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { data, render } from '../../../content/methods.11ty.js';
 import type { ReportModel } from '../../../lib/site/report-model.js';
 import { REFERENCES, renderFormula, type MethodsSection } from '../../../lib/site/methods/index.js';
+import { reportStub } from '../../helpers/report-stub.js';
 
 const HOSTILE = 'cells/"><script>alert(1)</script>.csv';
 
@@ -21,20 +22,7 @@ const section: MethodsSection = {
   files: { bibtex: 'supplement/references.bib', cslJson: 'supplement/references.json' },
 };
 
-const report = (methods: unknown): ReportModel => ({
-  meta: { title: 'Test report', authors: ['A. Author'], programme: null, licence: 'CC-BY-4.0', contact: null, version: 1, date: '2024-06-01', toolVersion: '0.1.0' },
-  counts: { cruises: 0, stations: 0, samples: 0, cells: 0, cellsByClass: [] },
-  inventory: [],
-  files: [],
-  ledger: [],
-  findings: [],
-  conversions: [],
-  matchSources: [],
-  crossover: [],
-  crossoverSettings: { maxDistanceKm: 200, minDepthM: 1000, thresholdNmolKg: 0.1 },
-  pages: ['index.html', 'methods.html'],
-  sections: methods === undefined ? {} : { methods },
-});
+const report = (methods: unknown): ReportModel => reportStub('methods.html', 'methods', methods);
 
 describe('content/methods.11ty.ts', () => {
   it('data.permalink is methods.html', () => {

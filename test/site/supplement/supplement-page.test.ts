@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { data, render } from '../../../content/supplement.11ty.js';
 import type { ReportModel } from '../../../lib/site/report-model.js';
 import type { SupplementSection } from '../../../lib/site/supplement/index.js';
+import { reportStub } from '../../helpers/report-stub.js';
 
 const HOSTILE = 'supplement/figures/"><img src=x onerror=alert(1)>.svg';
 
@@ -11,20 +12,7 @@ const section: SupplementSection = {
   zip: { path: 'supplement/basinquota-supplement.zip', label: 'All supplement files (zip)', bytes: 2_500_000 },
 };
 
-const report = (supplement: unknown): ReportModel => ({
-  meta: { title: 'Test report', authors: ['A. Author'], programme: null, licence: 'CC-BY-4.0', contact: null, version: 1, date: '2024-06-01', toolVersion: '0.1.0' },
-  counts: { cruises: 0, stations: 0, samples: 0, cells: 0, cellsByClass: [] },
-  inventory: [],
-  files: [],
-  ledger: [],
-  findings: [],
-  conversions: [],
-  matchSources: [],
-  crossover: [],
-  crossoverSettings: { maxDistanceKm: 200, minDepthM: 1000, thresholdNmolKg: 0.1 },
-  pages: ['index.html', 'supplement.html'],
-  sections: supplement === undefined ? {} : { supplement },
-});
+const report = (supplement: unknown): ReportModel => reportStub('supplement.html', 'supplement', supplement);
 
 describe('content/supplement.11ty.ts', () => {
   it('data.permalink is supplement.html', () => {
