@@ -93,7 +93,8 @@ describe('sampleGrid', () => {
     expect(sampleGrid(g, { lon: 0.5, lat: 0.5, depth: 0 }, { maxDistanceKm: 250 })).toBeNull();
   });
 
-  it('sampleGrid(1°×1°×33 grid) answers 10^5 points quickly', () => {
+  // Speed is measured by `npm run bench`, not by timed unit tests.
+  it('sampleGrid(1°×1°×33 grid with scattered gaps) answers almost every random point', () => {
     const lon = Array.from({ length: 360 }, (_, i) => -179.5 + i);
     const lat = Array.from({ length: 180 }, (_, i) => -89.5 + i);
     const depth = Array.from({ length: 33 }, (_, i) => i * 150);
@@ -101,12 +102,8 @@ describe('sampleGrid', () => {
     const g: Grid = { ...grid([0], [0], [0], []), lon: Float64Array.from(lon), lat: Float64Array.from(lat), depth: Float64Array.from(depth), values, periodicLon: true };
     let seed = 12345;
     const next = () => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
-    const start = performance.now();
     let found = 0;
-    for (let i = 0; i < 100_000; i++) if (sampleGrid(g, { lon: next() * 360 - 180, lat: next() * 180 - 90, depth: next() * 4800 }, { maxDistanceKm: 200 })) found++;
-    const ms = performance.now() - start;
-    console.log(`sampleGrid: 10^5 points in ${ms.toFixed(0)} ms`);
-    expect(found).toBeGreaterThan(99_000);
-    expect(ms).toBeLessThan(3000);
+    for (let i = 0; i < 10_000; i++) if (sampleGrid(g, { lon: next() * 360 - 180, lat: next() * 180 - 90, depth: next() * 4800 }, { maxDistanceKm: 200 })) found++;
+    expect(found).toBeGreaterThan(9_900);
   });
 });

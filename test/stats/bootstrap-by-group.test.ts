@@ -52,25 +52,27 @@ describe('bootstrapByGroup', () => {
     expect(r.intervals[0]).toEqual({ lower: 1, upper: 1 });
   });
 
-  it('bootstrapByGroup runs 10^5 rows × 1000 replicates of OLS in seconds', () => {
-    const n = 100_000;
+  // Speed is measured by `npm run bench`, not by timed unit tests.
+  it('bootstrapByGroup(group, olsOnIndices) returns one estimate per replicate on a large table', () => {
+    const n = 20_000;
     const rng = randomLcg(7);
     const normal = randomNormal.source(rng)(0, 1);
     const x = Float64Array.from({ length: n }, () => rng() * 10);
     const y = Float64Array.from(x, (v) => 1 + 0.5 * v + normal());
     const group = Int32Array.from({ length: n }, (_, i) => Math.floor(i / 50));
-    const t0 = performance.now();
     const r = bootstrapByGroup(
       group,
       (idx, len) => {
         const f = olsOnIndices(x, y, idx, len);
         return [f.slope];
       },
-      { replicates: 1000, seed: 11 },
+      { replicates: 200, seed: 11 },
     );
-    const seconds = (performance.now() - t0) / 1000;
-    expect(r.values[0]).toHaveLength(1000);
-    expect(seconds).toBeLessThan(10);
+    expect(r.values[0]).toHaveLength(200);
+    expect(r.failed).toEqual([0]);
+    // The slope is 0.5 by construction; with 400 groups of 50 rows its bootstrap interval is narrow around it.
+    expect(r.intervals[0].lower).toBeLessThan(0.5);
+    expect(r.intervals[0].upper).toBeGreaterThan(0.5);
   });
 });
 
